@@ -1,0 +1,36 @@
+// One jest run covers every TypeScript suite except the web app's (Vitest).
+// Each project is a room of the repo; `test/run.ts` picks which ones to run.
+const swc = [
+  '@swc/jest',
+  {
+    jsc: {
+      parser: { syntax: 'typescript', decorators: true },
+      transform: { legacyDecorator: true, decoratorMetadata: true },
+      target: 'es2022',
+    },
+    module: { type: 'commonjs' },
+  },
+];
+
+const shared = {
+  transform: { '^.+\\.ts$': swc },
+  moduleNameMapper: { '^@tallyloom/core$': '<rootDir>/packages/core/src/index.ts' },
+  testEnvironment: 'node',
+  rootDir: __dirname,
+};
+
+/** @type {import('jest').Config} */
+module.exports = {
+  projects: [
+    { ...shared, displayName: 'core', testMatch: ['<rootDir>/packages/core/src/**/*.spec.ts'] },
+    { ...shared, displayName: 'api', testMatch: ['<rootDir>/services/api/src/**/*.spec.ts'] },
+    { ...shared, displayName: 'db', testMatch: ['<rootDir>/db/**/*.spec.ts'] },
+    { ...shared, displayName: 'e2e', testMatch: ['<rootDir>/test/e2e/**/*.e2e-spec.ts'] },
+    {
+      ...shared,
+      displayName: 'browser',
+      testMatch: ['<rootDir>/test/browser/**/*.browser-spec.ts'],
+      testTimeout: 60000,
+    },
+  ],
+};

@@ -1,0 +1,3 @@
+export * from './contract/network';
+export * from './contract/health';
+export * from './contract/api-error';
