@@ -1,3 +1,10 @@
 export * from './contract/network';
 export * from './contract/health';
 export * from './contract/api-error';
+
+export * from './errors/domain-error';
+export * from './units/length';
+export * from './units/mass';
+export * from './panels/panel';
+export * from './panels/blanket-size';
+export * from './panels/panel-check';

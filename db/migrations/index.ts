@@ -1,0 +1,5 @@
+import type { Migration } from './context';
+import { createRegionsAndChapters } from './20261201-0001-create-regions-and-chapters';
+
+/** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
+export const MIGRATIONS: Migration[] = [createRegionsAndChapters];

@@ -1,0 +1,50 @@
+import { Module, type DynamicModule } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { existsSync } from 'node:fs';
+import { ChaptersModule } from './chapters/chapters.module';
+import { AppLoggerModule } from './common/logging/logger.module';
+import { AppConfig } from './config/app-config';
+import { AppConfigModule } from './config/config.module';
+import { HealthModule } from './health/health.module';
+import { JobsModule } from './jobs/jobs.module';
+import { RegionsModule } from './regions/regions.module';
+
+/** The whole application; built by a function so each instance validates the environment anew. */
+@Module({})
+export class AppModule {
+  static forRoot(): DynamicModule {
+    return {
+      module: AppModule,
+      imports: [
+        AppConfigModule.forRoot(),
+        AppLoggerModule,
+        SequelizeModule.forRootAsync({
+          inject: [AppConfig],
+          useFactory: (config: AppConfig) => ({
+            dialect: 'mariadb',
+            uri: config.databaseUrl,
+            autoLoadModels: true,
+            // The schema belongs to db/migrations; the app never alters it.
+            synchronize: false,
+            logging: false,
+            timezone: '+00:00',
+            pool: { max: 10, min: 0, idle: 10_000 },
+          }),
+        }),
+        JobsModule,
+        // The built web app, with index.html for every client route; /api stays the API's.
+        ServeStaticModule.forRootAsync({
+          inject: [AppConfig],
+          useFactory: (config: AppConfig) =>
+            config.serveWeb && existsSync(config.webDistDir)
+              ? [{ rootPath: config.webDistDir, exclude: ['/api/{*path}'] }]
+              : [],
+        }),
+        HealthModule,
+        RegionsModule,
+        ChaptersModule,
+      ],
+    };
+  }
+}

@@ -1,0 +1,12 @@
+import { Module } from '@nestjs/common';
+import { SequelizeModule } from '@nestjs/sequelize';
+import { ChaptersController } from './chapters.controller';
+import { ChaptersService } from './chapters.service';
+import { Chapter } from './models/chapter.model';
+
+@Module({
+  imports: [SequelizeModule.forFeature([Chapter])],
+  controllers: [ChaptersController],
+  providers: [ChaptersService],
+})
+export class ChaptersModule {}

@@ -1,0 +1,7 @@
+/** Every Bull queue the product uses; later issues add their jobs to these. */
+export enum QueueName {
+  /** Rebuilds report snapshots after tallies change. */
+  Reports = 'reports',
+}
+
+export const ALL_QUEUES: QueueName[] = Object.values(QueueName);

@@ -1,0 +1,57 @@
+import { join } from 'node:path';
+import type { Browser } from 'playwright-core';
+import { startTestApp, type TestApp } from '../e2e/support/test-app';
+import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
+
+const WEB_DIST = join(__dirname, '..', '..', 'packages', 'web', 'dist');
+
+describe('smoke: the app in Chromium', () => {
+  let testApp: TestApp;
+  let browser: Browser;
+  let baseUrl: string;
+
+  beforeAll(async () => {
+    testApp = await startTestApp({ SERVE_WEB: 'true', WEB_DIST_DIR: WEB_DIST });
+    await testApp.app.listen(0, '127.0.0.1');
+    baseUrl = await testApp.app.getUrl();
+    baseUrl = baseUrl.replace('[::1]', '127.0.0.1');
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await testApp?.close();
+  });
+
+  it('shows the demo network from the database, in our theme and in Roboto', async () => {
+    const { page, problems, context } = await openWatchedPage(browser, baseUrl);
+    await page.goto('/');
+    await page.getByRole('heading', { name: 'Network', level: 1 }).waitFor();
+    await page.getByText('North Ridge').first().waitFor();
+    await page.getByText('Alder Falls').first().waitFor();
+    await page.evaluate(() => document.fonts.ready);
+
+    const typography = await page.evaluate(() => ({
+      family: getComputedStyle(document.querySelector('main') ?? document.body).fontFamily,
+      robotoLoaded: document.fonts.check('16px Roboto'),
+    }));
+    expect(typography.family).toMatch(/^"?Roboto/);
+    expect(typography.robotoLoaded).toBe(true);
+
+    await screenshot(page, 'home-network');
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+
+  it('shows a friendly page for an unknown address, and the system status page', async () => {
+    const { page, problems, context } = await openWatchedPage(browser, baseUrl);
+    await page.goto('/no/such/page');
+    await page.getByText('Page not found').waitFor();
+    await screenshot(page, 'not-found');
+
+    await page.goto('/status');
+    await page.getByText(/MariaDB/).first().waitFor();
+    await screenshot(page, 'system-status');
+    expect(problems).toEqual([]);
+    await context.close();
+  });
+});

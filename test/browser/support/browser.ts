@@ -1,0 +1,52 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+
+export const SCREENSHOT_DIR = join(__dirname, '..', '..', 'artifacts', 'screenshots');
+
+/** Debian's Chromium, headless, with everything that would reach outside this machine switched off. */
+export async function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+}
+
+export interface WatchedPage {
+  context: BrowserContext;
+  page: Page;
+  /** Console errors and failed or off-site requests seen so far. */
+  problems: string[];
+}
+
+/** A page that records what a person would not see but a tester must: errors and stray requests. */
+export async function openWatchedPage(browser: Browser, baseUrl: string): Promise<WatchedPage> {
+  const context = await browser.newContext({ viewport: { width: 1366, height: 820 }, baseURL: baseUrl });
+  const page = await context.newPage();
+  const problems: string[] = [];
+  page.on('console', (message) => {
+    if (message.type() === 'error') problems.push(`console: ${message.text()}`);
+  });
+  page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
+  page.on('request', (req) => {
+    if (!req.url().startsWith(baseUrl) && !req.url().startsWith('data:')) problems.push(`off-site request: ${req.url()}`);
+  });
+  page.on('requestfailed', (req) => problems.push(`request failed: ${req.url()}`));
+  return { context, page, problems };
+}
+
+export async function screenshot(page: Page, name: string): Promise<string> {
+  mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  const path = join(SCREENSHOT_DIR, `${name}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}
