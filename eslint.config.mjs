@@ -6,17 +6,23 @@ import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
-  { ignores: ['**/dist/**', '**/node_modules/**', '.data/**', 'test/artifacts/**', '**/*.js', '**/*.mjs'] },
+  {
+    ignores: [
+      '**/dist/**',
+      '**/node_modules/**',
+      '.data/**',
+      'test/artifacts/**',
+      '**/*.js',
+      '**/*.mjs',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommendedTypeChecked,
   {
     languageOptions: {
       globals: { ...globals.node },
       parserOptions: {
-        projectService: {
-          allowDefaultProject: ['packages/web/vite.config.ts', 'test/*.ts', 'test/*/*.ts', 'test/*/*/*.ts'],
-          maximumDefaultProjectFileMatchCount_THIS_WILL_SLOW_DOWN_LINTING: 64,
-        },
+        projectService: true,
         tsconfigRootDir: import.meta.dirname,
       },
     },
@@ -35,7 +41,13 @@ export default tseslint.config(
     rules: reactHooks.configs.recommended.rules,
   },
   {
-    files: ['**/*.spec.ts', '**/*.e2e-spec.ts', '**/*.browser-spec.ts', '**/*.test.tsx', '**/*.test.ts'],
+    files: [
+      '**/*.spec.ts',
+      '**/*.e2e-spec.ts',
+      '**/*.browser-spec.ts',
+      '**/*.test.tsx',
+      '**/*.test.ts',
+    ],
     rules: {
       '@typescript-eslint/unbound-method': 'off',
       '@typescript-eslint/no-non-null-assertion': 'off',

@@ -22,12 +22,18 @@ async function main(command: string | undefined): Promise<void> {
       case 'status': {
         const pending = await migrator.pending();
         const executed = await migrator.executed();
-        log(`applied ${executed.length}, pending ${pending.length}${pending.length ? `: ${pending.map((m) => m.name).join(', ')}` : ''}`);
+        log(
+          `applied ${executed.length}, pending ${pending.length}${pending.length ? `: ${pending.map((m) => m.name).join(', ')}` : ''}`,
+        );
         break;
       }
       case 'seed': {
         const outcome = await seedDemo(sequelize);
-        log(outcome.seeded ? `demo network loaded: ${outcome.regions} regions, ${outcome.chapters} chapters` : 'database already has data: demo seed skipped');
+        log(
+          outcome.seeded
+            ? `demo network loaded: ${outcome.regions} regions, ${outcome.chapters} chapters`
+            : 'database already has data: demo seed skipped',
+        );
         break;
       }
       default:

@@ -4,7 +4,9 @@ import { Sequelize } from 'sequelize';
 export function connectAsOwner(): Sequelize {
   const url = process.env.DATABASE_MIGRATION_URL ?? process.env.DATABASE_URL;
   if (!url) {
-    throw new Error('Set DATABASE_URL (and optionally DATABASE_MIGRATION_URL) before running migrations or seeds.');
+    throw new Error(
+      'Set DATABASE_URL (and optionally DATABASE_MIGRATION_URL) before running migrations or seeds.',
+    );
   }
   return new Sequelize(url, { dialect: 'mariadb', logging: false, timezone: '+00:00' });
 }
@@ -22,6 +24,9 @@ export function appAccountFromEnv(): AppAccount | null {
   const app = decodeURIComponent(new URL(appUrl).username);
   const owner = decodeURIComponent(new URL(ownerUrl).username);
   if (!app || app === owner) return null;
-  const hosts = (process.env.DATABASE_APP_HOSTS ?? '%').split(',').map((h) => h.trim()).filter(Boolean);
+  const hosts = (process.env.DATABASE_APP_HOSTS ?? '%')
+    .split(',')
+    .map((h) => h.trim())
+    .filter(Boolean);
   return { user: app, hosts };
 }

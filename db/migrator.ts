@@ -5,7 +5,10 @@ import { MIGRATIONS } from './migrations';
 import type { MigrationContext } from './migrations/context';
 
 /** Umzug over our explicit migration list; applied names are kept in the `schema_migrations` table. */
-export function createMigrator(sequelize: Sequelize, log: (message: string) => void = () => undefined) {
+export function createMigrator(
+  sequelize: Sequelize,
+  log: (message: string) => void = () => undefined,
+) {
   const context: MigrationContext = {
     sequelize,
     queryInterface: sequelize.getQueryInterface(),

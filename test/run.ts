@@ -25,7 +25,12 @@ async function main(): Promise<number> {
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], testEnv, 'Migrations');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'seed'], testEnv, 'Demo seed');
   step('Building core and the web app for the browser tests…');
-  await runCommand('npm', ['run', '--silent', 'build', '-w', 'packages/core'], {}, 'The core build');
+  await runCommand(
+    'npm',
+    ['run', '--silent', 'build', '-w', 'packages/core'],
+    {},
+    'The core build',
+  );
   await runCommand('npm', ['run', '--silent', 'build', '-w', 'packages/web'], {}, 'The web build');
 
   const tally = { passed: 0, failed: 0 };
@@ -47,7 +52,15 @@ async function main(): Promise<number> {
     step('Running Vitest (web)…');
     const vitestOk = await runCommand(
       'npx',
-      ['vitest', 'run', '--root', 'packages/web', '--reporter=default', '--reporter=json', `--outputFile=${vitestReport}`],
+      [
+        'vitest',
+        'run',
+        '--root',
+        'packages/web',
+        '--reporter=default',
+        '--reporter=json',
+        `--outputFile=${vitestReport}`,
+      ],
       {},
       'Vitest',
     ).then(
@@ -64,15 +77,24 @@ async function main(): Promise<number> {
 }
 
 /** Both runners write jest-style JSON: numPassedTests / numFailedTests. */
-function addCounts(tally: { passed: number; failed: number }, file: string, runnerOk: boolean): void {
+function addCounts(
+  tally: { passed: number; failed: number },
+  file: string,
+  runnerOk: boolean,
+): void {
   if (!existsSync(file)) {
     tally.failed += 1; // the runner died before reporting: count it as a failure, never as silence
     return;
   }
-  const report = JSON.parse(readFileSync(file, 'utf8')) as { numPassedTests: number; numFailedTests: number; numRuntimeErrorTestSuites?: number };
+  const report = JSON.parse(readFileSync(file, 'utf8')) as {
+    numPassedTests: number;
+    numFailedTests: number;
+    numRuntimeErrorTestSuites?: number;
+  };
   tally.passed += report.numPassedTests;
   tally.failed += report.numFailedTests + (report.numRuntimeErrorTestSuites ?? 0);
-  if (!runnerOk && report.numFailedTests === 0 && !report.numRuntimeErrorTestSuites) tally.failed += 1;
+  if (!runnerOk && report.numFailedTests === 0 && !report.numRuntimeErrorTestSuites)
+    tally.failed += 1;
 }
 
 main().then(

@@ -13,7 +13,8 @@ export class LifecycleError extends Error {
 }
 
 export function exitWith(error: unknown): never {
-  const line = error instanceof LifecycleError ? error.message : String((error as Error)?.stack ?? error);
+  const line =
+    error instanceof LifecycleError ? error.message : String((error as Error)?.stack ?? error);
   process.stderr.write(`[tallyloom] ${line}\n`);
   process.exit(1);
 }

@@ -2,7 +2,14 @@ import { execFileSync, spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import { LifecycleError, step } from './console';
 
-const SYSTEM_BIN_DIRS = ['/usr/sbin', '/usr/bin', '/sbin', '/bin', '/usr/local/bin', '/usr/local/sbin'];
+const SYSTEM_BIN_DIRS = [
+  '/usr/sbin',
+  '/usr/bin',
+  '/sbin',
+  '/bin',
+  '/usr/local/bin',
+  '/usr/local/sbin',
+];
 
 /** Finds a program on PATH or in the usual system folders (mariadbd lives in /usr/sbin). */
 export function findProgram(name: string): string | null {
@@ -20,7 +27,11 @@ let aptListsFresh = false;
  * Makes sure a Debian package that provides `program` is installed, installing it with apt-get
  * when we are root. Never asks questions and never starts a system service.
  */
-export function ensureDebianPackage(program: string, debianPackage: string, purpose: string): string {
+export function ensureDebianPackage(
+  program: string,
+  debianPackage: string,
+  purpose: string,
+): string {
   const found = findProgram(program);
   if (found) return found;
 
@@ -48,17 +59,27 @@ export function ensureDebianPackage(program: string, debianPackage: string, purp
 
   const installed = findProgram(program);
   if (!installed) {
-    throw new LifecycleError(`apt-get installed ${debianPackage} but ${program} is still not found.`);
+    throw new LifecycleError(
+      `apt-get installed ${debianPackage} but ${program} is still not found.`,
+    );
   }
   return installed;
 }
 
-function runApt(aptGet: string, args: string[], env: NodeJS.ProcessEnv, debianPackage: string): void {
+function runApt(
+  aptGet: string,
+  args: string[],
+  env: NodeJS.ProcessEnv,
+  debianPackage: string,
+): void {
   // policy-rc.d style: Debian's maintainer scripts may try to start the service; RUNLEVEL=1 asks them not to.
   const result = spawnSync(aptGet, args, { env: { ...env, RUNLEVEL: '1' }, encoding: 'utf8' });
   if (result.status !== 0) {
-    const tail = `${result.stderr ?? ''}${result.stdout ?? ''}`.trim().split('\n').slice(-1)[0] ?? '';
-    throw new LifecycleError(`apt-get ${args[0]} ${debianPackage} failed: ${tail || `exit ${result.status}`}`);
+    const tail =
+      `${result.stderr ?? ''}${result.stdout ?? ''}`.trim().split('\n').slice(-1)[0] ?? '';
+    throw new LifecycleError(
+      `apt-get ${args[0]} ${debianPackage} failed: ${tail || `exit ${result.status}`}`,
+    );
   }
 }
 

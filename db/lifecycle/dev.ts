@@ -11,16 +11,26 @@ async function main(): Promise<void> {
   const env = await startServers('persistent');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], env, 'Migrations');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'seed'], env, 'Demo seed');
-  await runCommand('npm', ['run', '--silent', 'build', '-w', 'packages/core'], {}, 'The core build');
+  await runCommand(
+    'npm',
+    ['run', '--silent', 'build', '-w', 'packages/core'],
+    {},
+    'The core build',
+  );
 
-  const api = startLongRunning('npm', ['run', 'dev', '-w', 'services/api'], { ...env, NODE_ENV: 'development' });
+  const api = startLongRunning('npm', ['run', 'dev', '-w', 'services/api'], {
+    ...env,
+    NODE_ENV: 'development',
+  });
   const web = startLongRunning('npm', ['run', 'dev', '-w', 'packages/web'], {});
   onShutdown(() => stopLongRunning(api));
   onShutdown(() => stopLongRunning(web));
   for (const child of [api, web]) {
     child.once('exit', () => void shutdown().then(() => process.exit(1)));
   }
-  step('Dev servers starting: web on http://localhost:5173 (proxying /api to :3000). Ctrl-C stops everything.');
+  step(
+    'Dev servers starting: web on http://localhost:5173 (proxying /api to :3000). Ctrl-C stops everything.',
+  );
 }
 
 main().catch(async (error) => {

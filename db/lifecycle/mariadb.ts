@@ -38,7 +38,10 @@ const LOCAL_HOSTS = ['localhost', '127.0.0.1'];
 export async function startMariaDb(options: MariaDbOptions): Promise<RunningMariaDb> {
   const mariadbd = ensureDebianPackage('mariadbd', 'mariadb-server', 'the database server');
   const installDb = findProgram('mariadb-install-db');
-  if (!installDb) throw new LifecycleError('mariadb-install-db is missing although mariadbd is installed; reinstall mariadb-server.');
+  if (!installDb)
+    throw new LifecycleError(
+      'mariadb-install-db is missing although mariadbd is installed; reinstall mariadb-server.',
+    );
 
   mkdirSync(options.runDir, { recursive: true });
   const socket = join(options.runDir, 'mariadb.sock');
@@ -56,7 +59,13 @@ export async function startMariaDb(options: MariaDbOptions): Promise<RunningMari
     mkdirSync(options.dataDir, { recursive: true });
     const init = spawnSync(
       installDb,
-      ['--no-defaults', `--datadir=${options.dataDir}`, '--user=root', '--auth-root-authentication-method=normal', '--skip-test-db'],
+      [
+        '--no-defaults',
+        `--datadir=${options.dataDir}`,
+        '--user=root',
+        '--auth-root-authentication-method=normal',
+        '--skip-test-db',
+      ],
       { encoding: 'utf8' },
     );
     if (init.status !== 0) {
@@ -108,14 +117,24 @@ export async function startMariaDb(options: MariaDbOptions): Promise<RunningMari
   };
 }
 
-async function waitUntilAnswering(socket: string, hasExited: () => boolean, errorLog: string): Promise<void> {
+async function waitUntilAnswering(
+  socket: string,
+  hasExited: () => boolean,
+  errorLog: string,
+): Promise<void> {
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
     if (hasExited()) {
-      throw new LifecycleError(`MariaDB stopped while starting: ${tail(errorLog) || 'no reason logged'} (log: ${errorLog})`);
+      throw new LifecycleError(
+        `MariaDB stopped while starting: ${tail(errorLog) || 'no reason logged'} (log: ${errorLog})`,
+      );
     }
     try {
-      const connection = await mariadb.createConnection({ socketPath: socket, user: 'root', connectTimeout: 1000 });
+      const connection = await mariadb.createConnection({
+        socketPath: socket,
+        user: 'root',
+        connectTimeout: 1000,
+      });
       await connection.end();
       return;
     } catch {
@@ -133,12 +152,23 @@ async function createDatabaseAndAccounts(socket: string, options: MariaDbOptions
     );
     for (const host of LOCAL_HOSTS) {
       for (const account of [options.owner, options.app]) {
-        await connection.query(`CREATE USER IF NOT EXISTS ?@? IDENTIFIED BY ?`, [account.user, host, account.password]);
+        await connection.query(`CREATE USER IF NOT EXISTS ?@? IDENTIFIED BY ?`, [
+          account.user,
+          host,
+          account.password,
+        ]);
         // Keeps the stored password in step with the credentials file (e.g. after it was recreated).
-        await connection.query(`ALTER USER ?@? IDENTIFIED BY ?`, [account.user, host, account.password]);
+        await connection.query(`ALTER USER ?@? IDENTIFIED BY ?`, [
+          account.user,
+          host,
+          account.password,
+        ]);
       }
       // The owner runs migrations and passes table rights on to the app account.
-      await connection.query(`GRANT ALL PRIVILEGES ON \`${options.database}\`.* TO ?@? WITH GRANT OPTION`, [options.owner.user, host]);
+      await connection.query(
+        `GRANT ALL PRIVILEGES ON \`${options.database}\`.* TO ?@? WITH GRANT OPTION`,
+        [options.owner.user, host],
+      );
     }
     await connection.query('FLUSH PRIVILEGES');
   } finally {

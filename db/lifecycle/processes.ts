@@ -52,7 +52,11 @@ export async function terminate(pid: number, graceMs: number): Promise<void> {
  * A server left running by a crashed earlier run of ours (its pid file points at a live process
  * started on the same data folder) is stopped; a pid file pointing at nothing is removed.
  */
-export async function recoverStale(pidFile: string, dataDir: string, leftovers: string[]): Promise<'stopped' | 'cleaned' | 'none'> {
+export async function recoverStale(
+  pidFile: string,
+  dataDir: string,
+  leftovers: string[],
+): Promise<'stopped' | 'cleaned' | 'none'> {
   const pid = readPid(pidFile);
   let outcome: 'stopped' | 'cleaned' | 'none' = 'none';
   if (pid && isAlive(pid) && commandLine(pid).includes(dataDir)) {

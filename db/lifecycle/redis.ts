@@ -33,14 +33,22 @@ export async function startRedis(options: RedisOptions): Promise<RunningRedis> {
   await requirePortFree(options.port, 'Redis', 'REDIS_PORT');
 
   const args = [
-    '--port', String(options.port),
-    '--bind', '127.0.0.1',
-    '--daemonize', 'no',
-    '--dir', options.dataDir,
-    '--pidfile', pidFile,
-    '--logfile', logFile,
-    '--save', '',
-    '--appendonly', options.persistent ? 'yes' : 'no',
+    '--port',
+    String(options.port),
+    '--bind',
+    '127.0.0.1',
+    '--daemonize',
+    'no',
+    '--dir',
+    options.dataDir,
+    '--pidfile',
+    pidFile,
+    '--logfile',
+    logFile,
+    '--save',
+    '',
+    '--appendonly',
+    options.persistent ? 'yes' : 'no',
   ];
   const outFd = openSync(join(options.dataDir, 'redis.out'), 'a');
   const child = spawn(redisServer, args, { detached: true, stdio: ['ignore', outFd, outFd] });
@@ -60,11 +68,22 @@ export async function startRedis(options: RedisOptions): Promise<RunningRedis> {
   };
 }
 
-async function waitUntilAnswering(url: string, hasExited: () => boolean, logFile: string): Promise<void> {
+async function waitUntilAnswering(
+  url: string,
+  hasExited: () => boolean,
+  logFile: string,
+): Promise<void> {
   const deadline = Date.now() + 30_000;
   while (Date.now() < deadline) {
-    if (hasExited()) throw new LifecycleError(`Redis stopped while starting: ${tail(logFile) || 'no reason logged'} (log: ${logFile})`);
-    const client = new Redis(url, { lazyConnect: true, maxRetriesPerRequest: 0, retryStrategy: () => null });
+    if (hasExited())
+      throw new LifecycleError(
+        `Redis stopped while starting: ${tail(logFile) || 'no reason logged'} (log: ${logFile})`,
+      );
+    const client = new Redis(url, {
+      lazyConnect: true,
+      maxRetriesPerRequest: 0,
+      retryStrategy: () => null,
+    });
     client.on('error', () => undefined); // refused while starting: expected, we retry
     try {
       await client.connect();

@@ -49,7 +49,8 @@ export async function startServers(mode: ServerMode): Promise<ServerEnv> {
       DATABASE_APP_HOSTS: process.env.DATABASE_APP_HOSTS ?? '%',
     };
   } else {
-    const port = mode === 'persistent' ? Number(process.env.MARIADB_PORT ?? 3307) : await findFreePort();
+    const port =
+      mode === 'persistent' ? Number(process.env.MARIADB_PORT ?? 3307) : await findFreePort();
     step(`Starting MariaDB on 127.0.0.1:${port}…`);
     const server = await startMariaDb({
       dataDir: join(root, 'mariadb'),
@@ -75,9 +76,14 @@ export async function startServers(mode: ServerMode): Promise<ServerEnv> {
     step('REDIS_URL is set: using that Redis server.');
     redisUrl = process.env.REDIS_URL;
   } else {
-    const port = mode === 'persistent' ? Number(process.env.REDIS_PORT ?? 6380) : await findFreePort();
+    const port =
+      mode === 'persistent' ? Number(process.env.REDIS_PORT ?? 6380) : await findFreePort();
     step(`Starting Redis on 127.0.0.1:${port}…`);
-    const server = await startRedis({ dataDir: join(root, 'redis'), port, persistent: mode === 'persistent' });
+    const server = await startRedis({
+      dataDir: join(root, 'redis'),
+      port,
+      persistent: mode === 'persistent',
+    });
     onShutdown(async () => {
       step('Stopping Redis…');
       await server.stop();
@@ -88,7 +94,8 @@ export async function startServers(mode: ServerMode): Promise<ServerEnv> {
   if (mode === 'throwaway') {
     // Data goes with the run; the server logs stay in .data/test-run/run for a post-mortem.
     onShutdown(() => {
-      for (const dir of ['mariadb', 'redis']) rmSync(join(root, dir), { recursive: true, force: true });
+      for (const dir of ['mariadb', 'redis'])
+        rmSync(join(root, dir), { recursive: true, force: true });
     });
   }
   return { ...database, REDIS_URL: redisUrl };

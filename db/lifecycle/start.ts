@@ -40,7 +40,9 @@ async function main(): Promise<void> {
   onShutdown(() => stopLongRunning(api));
 
   if (!(await waitForHttp(`http://127.0.0.1:${port}/api/health`, 60_000, () => exited))) {
-    throw new LifecycleError('The app did not answer on /api/health within 60 s; see the output above.');
+    throw new LifecycleError(
+      'The app did not answer on /api/health within 60 s; see the output above.',
+    );
   }
   printWelcome(port);
 }
@@ -52,7 +54,12 @@ function printWelcome(port: number): void {
     `  API documentation:     http://localhost:${port}/api/docs`,
     '',
     ...(DEMO_SIGN_INS.length
-      ? ['  Demo sign-ins (demo data only):', ...DEMO_SIGN_INS.map((s) => `    ${s.role.padEnd(22)} ${s.email.padEnd(34)} ${s.password}`)]
+      ? [
+          '  Demo sign-ins (demo data only):',
+          ...DEMO_SIGN_INS.map(
+            (s) => `    ${s.role.padEnd(22)} ${s.email.padEnd(34)} ${s.password}`,
+          ),
+        ]
       : ['  Demo sign-ins: none yet — accounts and roles arrive with sign-in.']),
     '',
     '  Press Ctrl-C to stop the app, MariaDB and Redis.',

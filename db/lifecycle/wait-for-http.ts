@@ -1,7 +1,11 @@
 import { sleep } from './processes';
 
 /** Polls a URL until it answers (any HTTP status below 500 or exactly 503), or gives up. */
-export async function waitForHttp(url: string, timeoutMs: number, isExited: () => boolean): Promise<boolean> {
+export async function waitForHttp(
+  url: string,
+  timeoutMs: number,
+  isExited: () => boolean,
+): Promise<boolean> {
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     if (isExited()) return false;

@@ -2,7 +2,6 @@ import { DataTypes } from 'sequelize';
 import { timestampColumns } from './columns';
 import { grantToApp, type Migration } from './context';
 
-
 export const createRegionsAndChapters: Migration = {
   name: '20261201-0001-create-regions-and-chapters',
   async up(context) {

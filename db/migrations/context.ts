@@ -29,6 +29,8 @@ export async function grantToApp(
   const database = context.sequelize.getDatabaseName();
   for (const host of context.appAccount.hosts) {
     const account = `${context.sequelize.escape(context.appAccount.user)}@${context.sequelize.escape(host)}`;
-    await context.sequelize.query(`GRANT ${privileges.join(', ')} ON \`${database}\`.\`${table}\` TO ${account}`);
+    await context.sequelize.query(
+      `GRANT ${privileges.join(', ')} ON \`${database}\`.\`${table}\` TO ${account}`,
+    );
   }
 }

@@ -46,7 +46,12 @@ export const DEMO_REGIONS: DemoRegion[] = [
     chapters: [
       { name: 'Brindle Bay', activeFrom: '2022-09-01', reportingDueDay: 10 },
       { name: 'Harrowgate', activeFrom: '2023-03-01', reportingDueDay: 12 },
-      { name: 'Saltmarsh End', activeFrom: '2023-09-01', reportingDueDay: 10, activeTo: '2026-06-30' },
+      {
+        name: 'Saltmarsh End',
+        activeFrom: '2023-09-01',
+        reportingDueDay: 10,
+        activeTo: '2026-06-30',
+      },
     ],
   },
   {

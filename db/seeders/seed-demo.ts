@@ -9,9 +9,12 @@ export interface SeedOutcome {
 
 /** Loads the demo network into an empty database; leaves a database that has data alone. */
 export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
-  const [{ count }] = await sequelize.query<{ count: number }>('SELECT COUNT(*) AS count FROM regions', {
-    type: QueryTypes.SELECT,
-  });
+  const [{ count }] = await sequelize.query<{ count: number }>(
+    'SELECT COUNT(*) AS count FROM regions',
+    {
+      type: QueryTypes.SELECT,
+    },
+  );
   if (Number(count) > 0) return { seeded: false, regions: 0, chapters: 0 };
 
   let chapters = 0;
@@ -19,11 +22,14 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
     const qi = sequelize.getQueryInterface();
     for (const region of DEMO_REGIONS) {
       await qi.bulkInsert('regions', [{ name: region.name, code: region.code }], { transaction });
-      const [{ id }] = await sequelize.query<{ id: number }>('SELECT id FROM regions WHERE code = ?', {
-        replacements: [region.code],
-        type: QueryTypes.SELECT,
-        transaction,
-      });
+      const [{ id }] = await sequelize.query<{ id: number }>(
+        'SELECT id FROM regions WHERE code = ?',
+        {
+          replacements: [region.code],
+          type: QueryTypes.SELECT,
+          transaction,
+        },
+      );
       await qi.bulkInsert(
         'chapters',
         region.chapters.map((chapter) => ({

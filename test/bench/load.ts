@@ -9,7 +9,12 @@ export interface LoadResult {
 }
 
 /** A bounded load run against a loopback URL: fixed connections, fixed duration, then it stops. */
-export async function load(baseUrl: string, path: string, connections: number, seconds: number): Promise<LoadResult> {
+export async function load(
+  baseUrl: string,
+  path: string,
+  connections: number,
+  seconds: number,
+): Promise<LoadResult> {
   const result = await autocannon({ url: `${baseUrl}${path}`, connections, duration: seconds });
   const latency = result.latency as unknown as Record<string, number>;
   return {

@@ -24,7 +24,10 @@ async function main(): Promise<void> {
   step(`Load: ${connections} connections × ${seconds} s per route…`);
   await load(baseUrl, '/api/health', connections, 1); // warm-up
   const baseline = await load(baseUrl, '/api/health', connections, seconds);
-  const routes = [await load(baseUrl, '/api/regions', connections, seconds), await load(baseUrl, '/api/chapters', connections, seconds)];
+  const routes = [
+    await load(baseUrl, '/api/regions', connections, seconds),
+    await load(baseUrl, '/api/chapters', connections, seconds),
+  ];
   await testApp.close();
 
   const rows = [baseline, ...routes].map((r) => ({

@@ -49,7 +49,10 @@ describe('smoke: the app in Chromium', () => {
     await screenshot(page, 'not-found');
 
     await page.goto('/status');
-    await page.getByText(/MariaDB/).first().waitFor();
+    await page
+      .getByText(/MariaDB/)
+      .first()
+      .waitFor();
     await screenshot(page, 'system-status');
     expect(problems).toEqual([]);
     await context.close();

@@ -15,13 +15,19 @@ describe("the application's database account", () => {
   });
 
   it('may read the network tables', async () => {
-    const [row] = await asApp.query<{ n: number }>('SELECT COUNT(*) AS n FROM regions', { type: QueryTypes.SELECT });
+    const [row] = await asApp.query<{ n: number }>('SELECT COUNT(*) AS n FROM regions', {
+      type: QueryTypes.SELECT,
+    });
     expect(Number(row.n)).toBeGreaterThan(0);
   });
 
   it('may not change the schema or read the migration ledger', async () => {
     await expect(asApp.query('DROP TABLE chapters')).rejects.toThrow(/denied/i);
-    await expect(asApp.query('ALTER TABLE regions ADD COLUMN sneaky INT')).rejects.toThrow(/denied/i);
-    await expect(asApp.query('SELECT * FROM schema_migrations', { type: QueryTypes.SELECT })).rejects.toThrow(/denied/i);
+    await expect(asApp.query('ALTER TABLE regions ADD COLUMN sneaky INT')).rejects.toThrow(
+      /denied/i,
+    );
+    await expect(
+      asApp.query('SELECT * FROM schema_migrations', { type: QueryTypes.SELECT }),
+    ).rejects.toThrow(/denied/i);
   });
 });

@@ -10,7 +10,11 @@ describe('network: regions and chapters', () => {
   afterAll(() => testApp.close());
 
   it('lists a region with the number of its chapters, sorted by name', async () => {
-    const { region } = await aRegion().named('Quillmoor').withChapter('Ashby').withChapter('Brackwater').build(testApp.app);
+    const { region } = await aRegion()
+      .named('Quillmoor')
+      .withChapter('Ashby')
+      .withChapter('Brackwater')
+      .build(testApp.app);
     const response = await testApp.http().get('/api/regions').expect(200);
     const regions = response.body as RegionView[];
     const ours = regions.find((r) => r.id === region.id);
@@ -27,20 +31,31 @@ describe('network: regions and chapters', () => {
   });
 
   it("filters chapters by region and returns only that region's chapters", async () => {
-    const { region, chapters } = await aRegion().withChapter('Zephyr Mill', '2023-05-01', 12).withChapter('Cobble End').build(testApp.app);
+    const { region, chapters } = await aRegion()
+      .withChapter('Zephyr Mill', '2023-05-01', 12)
+      .withChapter('Cobble End')
+      .build(testApp.app);
     await aRegion().withChapter('Elsewhere').build(testApp.app);
 
     const response = await testApp.http().get(`/api/chapters?regionId=${region.id}`).expect(200);
     const listed = response.body as ChapterView[];
     expect(listed.map((c) => c.name)).toEqual([chapters[1].name, chapters[0].name]); // by name
-    expect(listed.every((c) => c.regionId === region.id && c.regionName === region.name)).toBe(true);
-    expect(listed.find((c) => c.id === chapters[0].id)).toMatchObject({ reportingDueDay: 12, activeFrom: '2023-05-01', activeTo: null });
+    expect(listed.every((c) => c.regionId === region.id && c.regionName === region.name)).toBe(
+      true,
+    );
+    expect(listed.find((c) => c.id === chapters[0].id)).toMatchObject({
+      reportingDueDay: 12,
+      activeFrom: '2023-05-01',
+      activeTo: null,
+    });
   });
 
   it('rejects a region id that is not a whole number with 400 naming the field', async () => {
     const response = await testApp.http().get('/api/chapters?regionId=abc').expect(400);
     const body = response.body as ApiErrorBody;
-    expect(body.fields).toEqual([{ field: 'regionId', messages: ['regionId must be a whole number'] }]);
+    expect(body.fields).toEqual([
+      { field: 'regionId', messages: ['regionId must be a whole number'] },
+    ]);
     expect(body.message).toContain('regionId');
     expect(body.requestId).toBeTruthy();
   });

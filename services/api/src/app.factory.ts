@@ -11,7 +11,9 @@ export const API_PREFIX = 'api';
 
 /** Builds the whole application as it runs in production; main.ts and the e2e tests share it. */
 export async function createApp(): Promise<NestExpressApplication> {
-  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(), { bufferLogs: true });
+  const app = await NestFactory.create<NestExpressApplication>(AppModule.forRoot(), {
+    bufferLogs: true,
+  });
   app.useLogger(app.get(Logger));
   app.use(
     helmet({

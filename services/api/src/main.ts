@@ -9,7 +9,9 @@ async function bootstrap(): Promise<void> {
     await app.listen(config.port, config.host);
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code === 'EADDRINUSE') {
-      process.stderr.write(`[tallyloom] Port ${config.port} is already in use: stop what runs there or set PORT to another port.\n`);
+      process.stderr.write(
+        `[tallyloom] Port ${config.port} is already in use: stop what runs there or set PORT to another port.\n`,
+      );
       await app.close();
       process.exit(1);
     }

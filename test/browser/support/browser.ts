@@ -30,7 +30,10 @@ export interface WatchedPage {
 
 /** A page that records what a person would not see but a tester must: errors and stray requests. */
 export async function openWatchedPage(browser: Browser, baseUrl: string): Promise<WatchedPage> {
-  const context = await browser.newContext({ viewport: { width: 1366, height: 820 }, baseURL: baseUrl });
+  const context = await browser.newContext({
+    viewport: { width: 1366, height: 820 },
+    baseURL: baseUrl,
+  });
   const page = await context.newPage();
   const problems: string[] = [];
   page.on('console', (message) => {
@@ -38,7 +41,8 @@ export async function openWatchedPage(browser: Browser, baseUrl: string): Promis
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
   page.on('request', (req) => {
-    if (!req.url().startsWith(baseUrl) && !req.url().startsWith('data:')) problems.push(`off-site request: ${req.url()}`);
+    if (!req.url().startsWith(baseUrl) && !req.url().startsWith('data:'))
+      problems.push(`off-site request: ${req.url()}`);
   });
   page.on('requestfailed', (req) => problems.push(`request failed: ${req.url()}`));
   return { context, page, problems };

@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import type { INestApplication } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
+import type { Server } from 'node:http';
 import request from 'supertest';
 import { createApp } from '../../../services/api/src/app.factory';
 
@@ -29,7 +30,7 @@ export async function startTestApp(overrides: Record<string, string> = {}): Prom
   }
   return {
     app,
-    http: () => request((app as INestApplication).getHttpServer()),
+    http: () => request((app as INestApplication).getHttpServer() as Server),
     close: () => app.close(),
   };
 }

@@ -12,7 +12,13 @@ export interface DatabaseHealth {
 export interface QueueHealth {
   status: ServiceState;
   /** Bull queues and their job counts, when up. */
-  queues?: Array<{ name: string; waiting: number; active: number; failed: number; delayed: number }>;
+  queues?: Array<{
+    name: string;
+    waiting: number;
+    active: number;
+    failed: number;
+    delayed: number;
+  }>;
   error?: string;
 }
 

@@ -68,7 +68,9 @@ export function blanketsFromStock(panelsInStock: number, grid: BlanketGrid): Sto
 }
 
 export function panelsForRequests(requests: readonly BlanketRequest[]): number {
-  if (!Array.isArray(requests)) {
+  // Typed callers always pass a list; the check guards values that arrive from JSON.
+  const list: unknown = requests;
+  if (!Array.isArray(list)) {
     throw new DomainError('requests', 'requests must be a list of { grid, blankets }.');
   }
   return requests.reduce((total, request, index) => {

@@ -24,7 +24,7 @@ export class ChaptersService {
 
 function toChapterDto(chapter: Chapter): ChapterDto {
   return {
-    id: chapter.id as number,
+    id: chapter.id,
     name: chapter.name,
     regionId: chapter.regionId,
     regionName: chapter.region?.name ?? '',

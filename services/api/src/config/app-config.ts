@@ -33,11 +33,16 @@ export class AppConfig {
 
   get serveWeb(): boolean {
     const value: unknown = this.config.get('SERVE_WEB');
-    return value === true || value === 'true' || (value === undefined && this.nodeEnv === 'production');
+    return (
+      value === true || value === 'true' || (value === undefined && this.nodeEnv === 'production')
+    );
   }
 
   /** The built web app (`npm run build -w packages/web`). */
   get webDistDir(): string {
-    return this.config.get<string>('WEB_DIST_DIR') ?? resolve(__dirname, '..', '..', '..', '..', 'packages', 'web', 'dist');
+    return (
+      this.config.get<string>('WEB_DIST_DIR') ??
+      resolve(__dirname, '..', '..', '..', '..', 'packages', 'web', 'dist')
+    );
   }
 }

@@ -11,12 +11,18 @@ export const envValidationSchema = Joi.object({
   DATABASE_URL: Joi.string()
     .uri({ scheme: ['mariadb', 'mysql'] })
     .required()
-    .messages({ 'any.required': 'DATABASE_URL is required (npm start sets it for the private MariaDB).' }),
+    .messages({
+      'any.required': 'DATABASE_URL is required (npm start sets it for the private MariaDB).',
+    }),
   REDIS_URL: Joi.string()
     .uri({ scheme: ['redis', 'rediss'] })
     .required()
-    .messages({ 'any.required': 'REDIS_URL is required (npm start sets it for the private Redis).' }),
-  LOG_LEVEL: Joi.string().valid('fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent').default('info'),
+    .messages({
+      'any.required': 'REDIS_URL is required (npm start sets it for the private Redis).',
+    }),
+  LOG_LEVEL: Joi.string()
+    .valid('fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent')
+    .default('info'),
   // Serve the built web app from this process; defaults to on in production.
   SERVE_WEB: Joi.boolean().optional(),
   WEB_DIST_DIR: Joi.string().optional(),

@@ -11,7 +11,10 @@ export class HealthController {
 
   @Get()
   @ApiOkResponse({ type: HealthReportDto, description: 'Database and queue are up' })
-  @ApiServiceUnavailableResponse({ type: HealthReportDto, description: 'Something is down; the body says what' })
+  @ApiServiceUnavailableResponse({
+    type: HealthReportDto,
+    description: 'Something is down; the body says what',
+  })
   async check(@Res({ passthrough: true }) response: Response): Promise<HealthReportDto> {
     const report = await this.health.report();
     response.status(report.status === 'ok' ? HttpStatus.OK : HttpStatus.SERVICE_UNAVAILABLE);

@@ -15,7 +15,9 @@ import type { HealthReportDto } from './dto/health-report.dto';
 const PROBE_TIMEOUT_MS = 2000;
 
 const APP_VERSION: string = (
-  JSON.parse(readFileSync(join(__dirname, '..', '..', 'package.json'), 'utf8')) as { version: string }
+  JSON.parse(readFileSync(join(__dirname, '..', '..', 'package.json'), 'utf8')) as {
+    version: string;
+  }
 ).version;
 
 @Injectable()
@@ -41,7 +43,9 @@ export class HealthService {
   private async checkDatabase(): Promise<DatabaseHealth> {
     try {
       const [row] = await withTimeout(
-        this.sequelize.query<{ version: string }>('SELECT VERSION() AS version', { type: QueryTypes.SELECT }),
+        this.sequelize.query<{ version: string }>('SELECT VERSION() AS version', {
+          type: QueryTypes.SELECT,
+        }),
       );
       return { status: 'up', version: row?.version };
     } catch (error) {
@@ -57,7 +61,13 @@ export class HealthService {
             const queue = this.moduleRef.get<Queue>(getQueueToken(name), { strict: false });
             await queue.client.ping();
             const counts = await queue.getJobCounts();
-            return { name, waiting: counts.waiting, active: counts.active, failed: counts.failed, delayed: counts.delayed };
+            return {
+              name,
+              waiting: counts.waiting,
+              active: counts.active,
+              failed: counts.failed,
+              delayed: counts.delayed,
+            };
           }),
         ),
       );
@@ -71,7 +81,10 @@ export class HealthService {
 function withTimeout<T>(promise: Promise<T>): Promise<T> {
   let timer: NodeJS.Timeout | undefined;
   const timeout = new Promise<never>((_, reject) => {
-    timer = setTimeout(() => reject(new Error(`no answer within ${PROBE_TIMEOUT_MS} ms`)), PROBE_TIMEOUT_MS);
+    timer = setTimeout(
+      () => reject(new Error(`no answer within ${PROBE_TIMEOUT_MS} ms`)),
+      PROBE_TIMEOUT_MS,
+    );
   });
   return Promise.race([promise, timeout]).finally(() => clearTimeout(timer));
 }

@@ -9,7 +9,10 @@ export class RegionsController {
   constructor(private readonly regions: RegionsService) {}
 
   @Get()
-  @ApiOkResponse({ type: [RegionDto], description: 'Every region of the network, by name, with its number of chapters' })
+  @ApiOkResponse({
+    type: [RegionDto],
+    description: 'Every region of the network, by name, with its number of chapters',
+  })
   list(): Promise<RegionDto[]> {
     return this.regions.list();
   }

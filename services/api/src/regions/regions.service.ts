@@ -21,5 +21,5 @@ export class RegionsService {
 }
 
 function toRegionDto(region: Region, chapterCount: number): RegionDto {
-  return { id: region.id as number, name: region.name, code: region.code, chapterCount };
+  return { id: region.id, name: region.name, code: region.code, chapterCount };
 }

@@ -14,7 +14,10 @@ export class ChapterDto implements ChapterView {
   @ApiProperty({ example: 'North Ridge' })
   regionName: string;
 
-  @ApiProperty({ example: 10, description: 'Day of the following month by which the monthly tally is due' })
+  @ApiProperty({
+    example: 10,
+    description: 'Day of the following month by which the monthly tally is due',
+  })
   reportingDueDay: number;
 
   @ApiProperty({ example: '2022-09-01', format: 'date' })

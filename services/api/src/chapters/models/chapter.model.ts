@@ -4,6 +4,8 @@ import { Region } from '../../regions/models/region.model';
 
 @Table({ tableName: 'chapters', underscored: true })
 export class Chapter extends Model {
+  declare id: number;
+
   @ForeignKey(() => Region)
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
   declare regionId: number;

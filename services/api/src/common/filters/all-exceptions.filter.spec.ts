@@ -28,9 +28,16 @@ describe('AllExceptionsFilter', () => {
 
   it('answers an unexpected error with 500, the request id and no stack or internal message', () => {
     const { host, sent } = fakeHost('req-abcdef123');
-    new AllExceptionsFilter().catch(new Error('connection pool exploded at /srv/secret.ts:12'), host);
+    new AllExceptionsFilter().catch(
+      new Error('connection pool exploded at /srv/secret.ts:12'),
+      host,
+    );
     expect(sent.status).toBe(500);
-    expect(sent.body).toMatchObject({ statusCode: 500, error: 'Internal Server Error', requestId: 'req-abcdef123' });
+    expect(sent.body).toMatchObject({
+      statusCode: 500,
+      error: 'Internal Server Error',
+      requestId: 'req-abcdef123',
+    });
     const text = JSON.stringify(sent.body);
     expect(text).not.toContain('exploded');
     expect(text).not.toContain('secret.ts');
@@ -40,15 +47,27 @@ describe('AllExceptionsFilter', () => {
   it('keeps the message and field list of an expected HTTP error', () => {
     const { host, sent } = fakeHost();
     const fields = [{ field: 'regionId', messages: ['regionId must be a whole number'] }];
-    new AllExceptionsFilter().catch(new BadRequestException({ message: 'Invalid input: regionId', fields }), host);
+    new AllExceptionsFilter().catch(
+      new BadRequestException({ message: 'Invalid input: regionId', fields }),
+      host,
+    );
     expect(sent.status).toBe(400);
-    expect(sent.body).toMatchObject({ statusCode: 400, error: 'Bad Request', message: 'Invalid input: regionId', fields });
+    expect(sent.body).toMatchObject({
+      statusCode: 400,
+      error: 'Bad Request',
+      message: 'Invalid input: regionId',
+      fields,
+    });
     expect(sent.body?.path).toBe('/api/things?x=1');
   });
 
   it('uses the standard reason phrase for the status', () => {
     const { host, sent } = fakeHost();
     new AllExceptionsFilter().catch(new ForbiddenException('Not your chapter'), host);
-    expect(sent.body).toMatchObject({ statusCode: 403, error: 'Forbidden', message: 'Not your chapter' });
+    expect(sent.body).toMatchObject({
+      statusCode: 403,
+      error: 'Forbidden',
+      message: 'Not your chapter',
+    });
   });
 });

@@ -1,4 +1,11 @@
-import { ArgumentsHost, Catch, HttpException, HttpStatus, Logger, type ExceptionFilter } from '@nestjs/common';
+import {
+  ArgumentsHost,
+  Catch,
+  HttpException,
+  HttpStatus,
+  Logger,
+  type ExceptionFilter,
+} from '@nestjs/common';
 import type { ApiErrorBody, FieldProblem } from '@tallyloom/core';
 import type { Request, Response } from 'express';
 import { STATUS_CODES } from 'node:http';
@@ -17,8 +24,13 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const response = http.getResponse<Response>();
     const requestId = request.id ? String(request.id) : undefined;
 
-    const body = exception instanceof HttpException ? this.fromHttpException(exception) : this.unexpected(exception, requestId);
-    response.status(body.statusCode).json({ ...body, requestId, path: request.originalUrl ?? request.url });
+    const body =
+      exception instanceof HttpException
+        ? this.fromHttpException(exception)
+        : this.unexpected(exception, requestId);
+    response
+      .status(body.statusCode)
+      .json({ ...body, requestId, path: request.originalUrl ?? request.url });
   }
 
   private fromHttpException(exception: HttpException): ApiErrorBody {
@@ -27,7 +39,11 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const error = STATUS_CODES[statusCode] ?? 'Error';
     if (typeof payload === 'string') return { statusCode, error, message: payload };
     const record = payload as { message?: unknown; fields?: FieldProblem[] };
-    const message = Array.isArray(record.message) ? record.message.join('; ') : String(record.message ?? error);
+    const message = Array.isArray(record.message)
+      ? record.message.map(String).join('; ')
+      : typeof record.message === 'string'
+        ? record.message
+        : error;
     return { statusCode, error, message, ...(record.fields ? { fields: record.fields } : {}) };
   }
 

@@ -15,7 +15,11 @@ import { assignRequestId } from './request-id';
           level: config.logLevel,
           // Enough to follow a request; full headers would bury the line.
           serializers: {
-            req: (req: { id: string; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+            req: (req: { id: string; method: string; url: string }) => ({
+              id: req.id,
+              method: req.method,
+              url: req.url,
+            }),
             res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
           },
           genReqId: assignRequestId,
@@ -24,7 +28,10 @@ import { assignRequestId } from './request-id';
           autoLogging: { ignore: (req) => req.url === '/api/health' },
           transport:
             config.nodeEnv === 'development'
-              ? { target: 'pino-pretty', options: { singleLine: true, translateTime: 'SYS:HH:MM:ss' } }
+              ? {
+                  target: 'pino-pretty',
+                  options: { singleLine: true, translateTime: 'SYS:HH:MM:ss' },
+                }
               : undefined,
         },
       }),

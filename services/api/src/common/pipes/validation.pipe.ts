@@ -5,7 +5,9 @@ import type { FieldProblem } from '@tallyloom/core';
 export function toFieldProblems(errors: ValidationError[], parent = ''): FieldProblem[] {
   return errors.flatMap((error) => {
     const field = parent ? `${parent}.${error.property}` : error.property;
-    const own: FieldProblem[] = error.constraints ? [{ field, messages: Object.values(error.constraints) }] : [];
+    const own: FieldProblem[] = error.constraints
+      ? [{ field, messages: Object.values(error.constraints) }]
+      : [];
     return [...own, ...toFieldProblems(error.children ?? [], field)];
   });
 }

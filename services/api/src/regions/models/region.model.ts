@@ -4,6 +4,8 @@ import type { Relation } from '../../common/models/relation';
 
 @Table({ tableName: 'regions', underscored: true })
 export class Region extends Model {
+  declare id: number;
+
   @Column({ type: DataType.STRING(80), allowNull: false })
   declare name: string;
 

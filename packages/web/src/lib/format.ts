@@ -1,0 +1,36 @@
+import { format, formatDuration, intervalToDuration, isValid, parseISO } from 'date-fns';
+
+// One locale for every figure, so a column never mixes "1,234" and "1 234".
+const countFormat = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+
+/** 12345 → "12,345". */
+export function formatCount(value: number): string {
+  return countFormat.format(value);
+}
+
+/** "2026-03-01" → "Mar 2026". Parsed as a local date so the month never slips across time zones. */
+export function formatMonthYear(isoDate: string): string {
+  const date = parseISO(isoDate);
+  return isValid(date) ? format(date, 'MMM yyyy') : isoDate;
+}
+
+/** 10 → "Day 10 of the following month". */
+export function formatReportDueDay(dueDay: number): string {
+  return `Day ${dueDay} of the following month`;
+}
+
+/** 273_600 → "3 days 4 hours"; under a minute → "less than a minute". */
+export function formatUptime(totalSeconds: number): string {
+  if (totalSeconds < 60) return 'less than a minute';
+  const duration = intervalToDuration({ start: 0, end: Math.floor(totalSeconds) * 1000 });
+  const units =
+    totalSeconds >= 86_400
+      ? (['years', 'months', 'days', 'hours'] as const)
+      : (['hours', 'minutes'] as const);
+  return formatDuration(duration, { format: [...units] });
+}
+
+/** A moment of the day for "checked at" lines, e.g. "14:03:22". */
+export function formatTimeOfDay(timestamp: number): string {
+  return format(timestamp, 'HH:mm:ss');
+}
