@@ -36,7 +36,7 @@ describe('recoverStale', () => {
     const socket = join(dir, 'server.sock');
     writeFileSync(pidFile, '999999\n');
     writeFileSync(socket, '');
-    expect(await recoverStale(pidFile, dir, [socket])).toBe('cleaned');
+    expect(await recoverStale(pidFile, () => true, [socket])).toBe('cleaned');
     expect(existsSync(pidFile)).toBe(false);
     expect(existsSync(socket)).toBe(false);
   });
@@ -49,7 +49,7 @@ describe('recoverStale', () => {
     const pidFile = join(dir, 'server.pid');
     writeFileSync(pidFile, String(child.pid));
     await new Promise((resolve) => setTimeout(resolve, 100));
-    expect(await recoverStale(pidFile, dir, [])).toBe('stopped');
+    expect(await recoverStale(pidFile, (cmd) => cmd.includes(dir), [])).toBe('stopped');
     expect(isAlive(child.pid!)).toBe(false);
   });
 
@@ -57,7 +57,7 @@ describe('recoverStale', () => {
     const dir = mkdtempSync(join(tmpdir(), 'tl-other-'));
     const pidFile = join(dir, 'server.pid');
     writeFileSync(pidFile, String(process.pid)); // this very test process: not started on `dir`
-    expect(await recoverStale(pidFile, dir, [])).toBe('cleaned');
+    expect(await recoverStale(pidFile, (cmd) => cmd.includes(dir), [])).toBe('cleaned');
     expect(isAlive(process.pid)).toBe(true);
   });
 });

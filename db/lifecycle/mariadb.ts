@@ -48,7 +48,10 @@ export async function startMariaDb(options: MariaDbOptions): Promise<RunningMari
   const pidFile = join(options.runDir, 'mariadb.pid');
   const errorLog = join(options.runDir, 'mariadb.err');
 
-  const recovered = await recoverStale(pidFile, options.dataDir, [socket, `${socket}.lock`]);
+  const recovered = await recoverStale(pidFile, (cmd) => cmd.includes(options.dataDir), [
+    socket,
+    `${socket}.lock`,
+  ]);
   if (recovered === 'stopped') step('Stopped a MariaDB server left running by an earlier run.');
   if (recovered === 'cleaned') step('Removed a stale MariaDB pid file from an earlier run.');
 

@@ -50,16 +50,17 @@ export async function terminate(pid: number, graceMs: number): Promise<void> {
 
 /**
  * A server left running by a crashed earlier run of ours (its pid file points at a live process
- * started on the same data folder) is stopped; a pid file pointing at nothing is removed.
+ * that `isOurs` recognises by its command line) is stopped; a pid file pointing at nothing, or at
+ * someone else's process, is removed.
  */
 export async function recoverStale(
   pidFile: string,
-  dataDir: string,
+  isOurs: (commandLine: string) => boolean,
   leftovers: string[],
 ): Promise<'stopped' | 'cleaned' | 'none'> {
   const pid = readPid(pidFile);
   let outcome: 'stopped' | 'cleaned' | 'none' = 'none';
-  if (pid && isAlive(pid) && commandLine(pid).includes(dataDir)) {
+  if (pid && isAlive(pid) && isOurs(commandLine(pid))) {
     await terminate(pid, 30_000);
     outcome = 'stopped';
   } else if (pid) {

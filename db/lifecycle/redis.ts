@@ -27,7 +27,12 @@ export async function startRedis(options: RedisOptions): Promise<RunningRedis> {
   const pidFile = join(options.dataDir, 'redis.pid');
   const logFile = join(options.dataDir, 'redis.log');
 
-  const recovered = await recoverStale(pidFile, options.dataDir, []);
+  // Redis renames its process to "redis-server 127.0.0.1:PORT", so it is recognised by its port.
+  const recovered = await recoverStale(
+    pidFile,
+    (cmd) => cmd.includes('redis-server') && cmd.includes(`127.0.0.1:${options.port}`),
+    [],
+  );
   if (recovered === 'stopped') step('Stopped a Redis server left running by an earlier run.');
 
   await requirePortFree(options.port, 'Redis', 'REDIS_PORT');

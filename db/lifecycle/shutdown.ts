@@ -14,10 +14,19 @@ export function onShutdown(cleanup: Cleanup): void {
   const signals: NodeJS.Signals[] = ['SIGINT', 'SIGTERM', 'SIGHUP'];
   for (const signal of signals) {
     process.on(signal, () => {
+      // tsx relays the terminal's signal to us as well, so the same Ctrl-C can arrive twice.
+      if (running) return;
       step(`${signal} received: stopping…`);
-      void shutdown().then(() => process.exit(signal === 'SIGINT' ? 130 : 143));
+      void shutdown().then(() => {
+        step('Stopped.');
+        process.exit(signal === 'SIGINT' ? 130 : 143);
+      });
     });
   }
+}
+
+export function isShuttingDown(): boolean {
+  return running !== null;
 }
 
 /** Runs every registered cleanup once; safe to call from several places. */

@@ -2,7 +2,7 @@ import { LifecycleError, exitWith, step } from './console';
 import { requirePortFree } from './ports';
 import { runCommand, startLongRunning, stopLongRunning } from './run-command';
 import { startServers } from './servers';
-import { onShutdown, shutdown } from './shutdown';
+import { isShuttingDown, onShutdown, shutdown } from './shutdown';
 import { waitForHttp } from './wait-for-http';
 import { DEMO_SIGN_INS } from '../seeders/demo-sign-ins';
 
@@ -34,8 +34,9 @@ async function main(): Promise<void> {
   let exited = false;
   api.once('exit', (code) => {
     exited = true;
-    step(`The app stopped (exit ${code ?? 'signal'}).`);
-    void shutdown().then(() => process.exit(code === 0 ? 0 : 1));
+    if (isShuttingDown()) return; // we asked it to stop
+    step(`The app stopped unexpectedly (exit ${code ?? 'signal'}); stopping the servers.`);
+    void shutdown().then(() => process.exit(1));
   });
   onShutdown(() => stopLongRunning(api));
 
