@@ -31,7 +31,7 @@ async function main(command: string | undefined): Promise<void> {
         const outcome = await seedDemo(sequelize);
         log(
           outcome.seeded
-            ? `demo network loaded: ${outcome.regions} regions, ${outcome.chapters} chapters`
+            ? `demo network loaded: ${outcome.regions} regions, ${outcome.chapters} chapters, ${outcome.people} people`
             : 'database already has data: demo seed skipped',
         );
         break;

@@ -1,9 +1,10 @@
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { exitWith, step } from '../db/lifecycle/console';
+import { appSecrets } from '../db/lifecycle/app-secrets';
 import { ensureDebianPackage } from '../db/lifecycle/debian';
 import { runCommand } from '../db/lifecycle/run-command';
-import { DATA_ROOT, startServers } from '../db/lifecycle/servers';
+import { startServers, throwawayRoot } from '../db/lifecycle/servers';
 import { shutdown } from '../db/lifecycle/shutdown';
 
 /**
@@ -13,13 +14,12 @@ import { shutdown } from '../db/lifecycle/shutdown';
  */
 async function main(): Promise<number> {
   const jestArgs = process.argv.slice(2);
-  const reports = join(DATA_ROOT, 'test-reports');
-  rmSync(reports, { recursive: true, force: true });
+  const reports = join(throwawayRoot(), 'reports');
   mkdirSync(reports, { recursive: true });
 
   ensureDebianPackage('chromium', 'chromium', 'the browser tests');
   const env = await startServers('throwaway');
-  const testEnv = { ...env, NODE_ENV: 'test', LOG_LEVEL: 'warn' };
+  const testEnv = { ...env, ...appSecrets(false), NODE_ENV: 'test', LOG_LEVEL: 'warn' };
 
   step('Applying migrations and loading the demo network…');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], testEnv, 'Migrations');

@@ -1,4 +1,5 @@
 import { exitWith, step } from './console';
+import { appSecrets } from './app-secrets';
 import { runCommand, startLongRunning, stopLongRunning } from './run-command';
 import { startServers } from './servers';
 import { onShutdown, shutdown } from './shutdown';
@@ -20,6 +21,7 @@ async function main(): Promise<void> {
 
   const api = startLongRunning('npm', ['run', 'dev', '-w', 'services/api'], {
     ...env,
+    ...appSecrets(true),
     NODE_ENV: 'development',
   });
   const web = startLongRunning('npm', ['run', 'dev', '-w', 'packages/web'], {});

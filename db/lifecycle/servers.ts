@@ -1,9 +1,10 @@
 import { randomBytes } from 'node:crypto';
-import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { step } from './console';
 import { startMariaDb } from './mariadb';
 import { findFreePort } from './ports';
+import { isAlive } from './processes';
 import { startRedis } from './redis';
 import { onShutdown } from './shutdown';
 
@@ -36,8 +37,7 @@ const DATABASE_NAME = 'tallyloom';
  * servers someone runs themselves. Registers their shutdown on exit.
  */
 export async function startServers(mode: ServerMode): Promise<ServerEnv> {
-  const root = mode === 'persistent' ? DATA_ROOT : join(DATA_ROOT, 'test-run');
-  if (mode === 'throwaway') rmSync(root, { recursive: true, force: true });
+  const root = mode === 'persistent' ? DATA_ROOT : throwawayRoot();
   mkdirSync(root, { recursive: true });
 
   let database: Pick<ServerEnv, 'DATABASE_URL' | 'DATABASE_MIGRATION_URL' | 'DATABASE_APP_HOSTS'>;
@@ -92,13 +92,29 @@ export async function startServers(mode: ServerMode): Promise<ServerEnv> {
   }
 
   if (mode === 'throwaway') {
-    // Data goes with the run; the server logs stay in .data/test-run/run for a post-mortem.
+    // Data goes with the run; the server logs stay in .data/test-runs/<pid>/run for a post-mortem.
     onShutdown(() => {
       for (const dir of ['mariadb', 'redis'])
         rmSync(join(root, dir), { recursive: true, force: true });
     });
   }
   return { ...database, REDIS_URL: redisUrl };
+}
+
+/**
+ * One folder per throwaway run (`.data/test-runs/<pid>`), so two test runs can go side by side;
+ * folders of runs whose process is gone are removed first.
+ */
+export function throwawayRoot(): string {
+  const parent = join(DATA_ROOT, 'test-runs');
+  mkdirSync(parent, { recursive: true });
+  for (const name of readdirSync(parent)) {
+    const pid = Number(name);
+    if (!Number.isInteger(pid) || pid === process.pid || !isAlive(pid)) {
+      if (pid !== process.pid) rmSync(join(parent, name), { recursive: true, force: true });
+    }
+  }
+  return join(parent, String(process.pid));
 }
 
 /** Generated once per data folder and kept beside it, so a second `npm start` reuses the data. */

@@ -1,4 +1,5 @@
 import { LifecycleError, exitWith, step } from './console';
+import { appSecrets } from './app-secrets';
 import { requirePortFree } from './ports';
 import { runCommand, startLongRunning, stopLongRunning } from './run-command';
 import { startServers } from './servers';
@@ -27,6 +28,7 @@ async function main(): Promise<void> {
   step(`Starting the app on port ${port}…`);
   const api = startLongRunning('node', ['services/api/dist/main.js'], {
     ...env,
+    ...appSecrets(true),
     NODE_ENV: 'production',
     PORT: String(port),
     SERVE_WEB: 'true',
@@ -54,14 +56,11 @@ function printWelcome(port: number): void {
     `  Tallyloom is running:  http://localhost:${port}`,
     `  API documentation:     http://localhost:${port}/api/docs`,
     '',
-    ...(DEMO_SIGN_INS.length
-      ? [
-          '  Demo sign-ins (demo data only):',
-          ...DEMO_SIGN_INS.map(
-            (s) => `    ${s.role.padEnd(22)} ${s.email.padEnd(34)} ${s.password}`,
-          ),
-        ]
-      : ['  Demo sign-ins: none yet — accounts and roles arrive with sign-in.']),
+    '  Demo sign-ins (invented people, demo data only):',
+    ...DEMO_SIGN_INS.map(
+      (s) =>
+        `    ${s.roleLabel.padEnd(21)} ${s.email.padEnd(41)} ${s.password.padEnd(24)} ${s.chapterName ?? (s.regionCode ? `region ${s.regionCode}` : 'whole network')}`,
+    ),
     '',
     '  Press Ctrl-C to stop the app, MariaDB and Redis.',
     '',

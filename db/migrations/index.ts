@@ -1,5 +1,6 @@
 import type { Migration } from './context';
 import { createRegionsAndChapters } from './20261201-0001-create-regions-and-chapters';
+import { createPeopleAndAuditLog } from './20261201-0002-create-people-and-audit-log';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
-export const MIGRATIONS: Migration[] = [createRegionsAndChapters];
+export const MIGRATIONS: Migration[] = [createRegionsAndChapters, createPeopleAndAuditLog];

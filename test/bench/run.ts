@@ -1,4 +1,5 @@
 import { exitWith, step } from '../../db/lifecycle/console';
+import { appSecrets } from '../../db/lifecycle/app-secrets';
 import { runCommand } from '../../db/lifecycle/run-command';
 import { startServers } from '../../db/lifecycle/servers';
 import { shutdown } from '../../db/lifecycle/shutdown';
@@ -15,7 +16,7 @@ async function main(): Promise<void> {
   const env = await startServers('throwaway');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], env, 'Migrations');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'seed'], env, 'Demo seed');
-  Object.assign(process.env, env, { NODE_ENV: 'production', LOG_LEVEL: 'warn' });
+  Object.assign(process.env, env, appSecrets(false), { NODE_ENV: 'production', LOG_LEVEL: 'warn' });
 
   const testApp = await startTestApp();
   await testApp.app.listen(0, '127.0.0.1');

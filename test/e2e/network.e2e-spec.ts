@@ -1,11 +1,15 @@
 import type { ApiErrorBody, ChapterView, RegionView } from '@tallyloom/core';
 import { aRegion } from './support/network-builders';
+import { signedIn } from './support/people-builders';
 import { startTestApp, type TestApp } from './support/test-app';
 
 describe('network: regions and chapters', () => {
   let testApp: TestApp;
+  let auth: string;
+  const get = (url: string) => testApp.http().get(url).set('Authorization', auth);
   beforeAll(async () => {
     testApp = await startTestApp();
+    auth = `Bearer ${(await signedIn(testApp, 'national_staff')).token}`;
   });
   afterAll(() => testApp.close());
 
@@ -15,7 +19,7 @@ describe('network: regions and chapters', () => {
       .withChapter('Ashby')
       .withChapter('Brackwater')
       .build(testApp.app);
-    const response = await testApp.http().get('/api/regions').expect(200);
+    const response = await get('/api/regions').expect(200);
     const regions = response.body as RegionView[];
     const ours = regions.find((r) => r.id === region.id);
     expect(ours).toEqual({ id: region.id, name: region.name, code: region.code, chapterCount: 2 });
@@ -24,9 +28,9 @@ describe('network: regions and chapters', () => {
   });
 
   it('shows the demo network loaded by the seed', async () => {
-    const regions = (await testApp.http().get('/api/regions').expect(200)).body as RegionView[];
+    const regions = (await get('/api/regions').expect(200)).body as RegionView[];
     expect(regions.find((r) => r.name === 'North Ridge')?.chapterCount).toBe(4);
-    const chapters = (await testApp.http().get('/api/chapters').expect(200)).body as ChapterView[];
+    const chapters = (await get('/api/chapters').expect(200)).body as ChapterView[];
     expect(chapters.find((c) => c.name === 'Alder Falls')?.regionName).toBe('North Ridge');
   });
 
@@ -37,7 +41,7 @@ describe('network: regions and chapters', () => {
       .build(testApp.app);
     await aRegion().withChapter('Elsewhere').build(testApp.app);
 
-    const response = await testApp.http().get(`/api/chapters?regionId=${region.id}`).expect(200);
+    const response = await get(`/api/chapters?regionId=${region.id}`).expect(200);
     const listed = response.body as ChapterView[];
     expect(listed.map((c) => c.name)).toEqual([chapters[1].name, chapters[0].name]); // by name
     expect(listed.every((c) => c.regionId === region.id && c.regionName === region.name)).toBe(
@@ -51,7 +55,7 @@ describe('network: regions and chapters', () => {
   });
 
   it('rejects a region id that is not a whole number with 400 naming the field', async () => {
-    const response = await testApp.http().get('/api/chapters?regionId=abc').expect(400);
+    const response = await get('/api/chapters?regionId=abc').expect(400);
     const body = response.body as ApiErrorBody;
     expect(body.fields).toEqual([
       { field: 'regionId', messages: ['regionId must be a whole number'] },
@@ -61,7 +65,7 @@ describe('network: regions and chapters', () => {
   });
 
   it('rejects an unknown query parameter with 400 naming it', async () => {
-    const response = await testApp.http().get('/api/chapters?colour=teal').expect(400);
+    const response = await get('/api/chapters?colour=teal').expect(400);
     expect((response.body as ApiErrorBody).fields?.[0]?.field).toBe('colour');
   });
 });

@@ -1,6 +1,7 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import cookieParser from 'cookie-parser';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { AppModule } from './app.module';
@@ -30,6 +31,7 @@ export async function createApp(): Promise<NestExpressApplication> {
       },
     }),
   );
+  app.use(cookieParser());
   app.setGlobalPrefix(API_PREFIX);
   app.useGlobalPipes(createValidationPipe());
   app.useGlobalFilters(new AllExceptionsFilter());
@@ -41,6 +43,7 @@ export async function createApp(): Promise<NestExpressApplication> {
       .setTitle('Tallyloom API')
       .setDescription('Reporting console of a volunteer blanket network')
       .setVersion('0.1.0')
+      .addBearerAuth()
       .build(),
   );
   SwaggerModule.setup(`${API_PREFIX}/docs`, app, document);

@@ -6,7 +6,11 @@ import { ChaptersModule } from './chapters/chapters.module';
 import { AppLoggerModule } from './common/logging/logger.module';
 import { AppConfig } from './config/app-config';
 import { AppConfigModule } from './config/config.module';
+import { AuditModule } from './audit/audit.module';
+import { AuthModule } from './auth/auth.module';
 import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { UsersModule } from './users/users.module';
 import { JobsModule } from './jobs/jobs.module';
 import { RegionsModule } from './regions/regions.module';
 
@@ -41,6 +45,10 @@ export class AppModule {
               ? [{ rootPath: config.webDistDir, exclude: ['/api/{*path}'] }]
               : [],
         }),
+        AuditModule,
+        MailModule,
+        AuthModule,
+        UsersModule,
         HealthModule,
         RegionsModule,
         ChaptersModule,

@@ -1,17 +1,28 @@
 import { Controller, Get, Query } from '@nestjs/common';
-import { ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { Allow } from '../common/access/access.decorators';
+import { Ctx, type SignedInContext } from '../common/context/request-context';
+import { IdParam } from '../common/pipes/id-param';
 import { ChaptersService } from './chapters.service';
 import { ChapterDto } from './dto/chapter.dto';
 import { ListChaptersQuery } from './dto/list-chapters.query';
 
 @ApiTags('network')
+@ApiBearerAuth()
 @Controller('chapters')
+@Allow('network.read')
 export class ChaptersController {
   constructor(private readonly chapters: ChaptersService) {}
 
   @Get()
-  @ApiOkResponse({ type: [ChapterDto], description: 'Chapters by region and name' })
-  list(@Query() query: ListChaptersQuery): Promise<ChapterDto[]> {
-    return this.chapters.list(query);
+  @ApiOkResponse({ type: [ChapterDto], description: 'Chapters in your scope, by region and name' })
+  list(@Query() query: ListChaptersQuery, @Ctx() context: SignedInContext): Promise<ChapterDto[]> {
+    return this.chapters.list(context.actor, query);
+  }
+
+  @Get(':id')
+  @ApiOkResponse({ type: ChapterDto })
+  get(@IdParam() id: number, @Ctx() context: SignedInContext): Promise<ChapterDto> {
+    return this.chapters.get(context.actor, id);
   }
 }

@@ -1,5 +1,7 @@
-import { Injectable } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
+import type { Actor } from '../common/access/actor';
+import { chapterScope, within } from '../common/access/scope';
 import { Region } from '../regions/models/region.model';
 import type { ChapterDto } from './dto/chapter.dto';
 import type { ListChaptersQuery } from './dto/list-chapters.query';
@@ -9,9 +11,10 @@ import { Chapter } from './models/chapter.model';
 export class ChaptersService {
   constructor(@InjectModel(Chapter) private readonly chapters: typeof Chapter) {}
 
-  async list(query: ListChaptersQuery): Promise<ChapterDto[]> {
+  /** Chapters in the person's scope; a region filter outside scope simply finds nothing. */
+  async list(actor: Actor, query: ListChaptersQuery): Promise<ChapterDto[]> {
     const rows = await this.chapters.findAll({
-      where: query.regionId ? { regionId: query.regionId } : {},
+      where: within(chapterScope(actor), query.regionId ? { regionId: query.regionId } : {}),
       include: [{ model: Region, attributes: ['name'] }],
       order: [
         [{ model: Region, as: 'region' }, 'name', 'ASC'],
@@ -19,6 +22,15 @@ export class ChaptersService {
       ],
     });
     return rows.map(toChapterDto);
+  }
+
+  async get(actor: Actor, id: number): Promise<ChapterDto> {
+    const row = await this.chapters.findOne({
+      where: within(chapterScope(actor), { id }),
+      include: [{ model: Region, attributes: ['name'] }],
+    });
+    if (!row) throw new NotFoundException('No such chapter.');
+    return toChapterDto(row);
   }
 }
 

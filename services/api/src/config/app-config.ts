@@ -45,4 +45,48 @@ export class AppConfig {
       resolve(__dirname, '..', '..', '..', '..', 'packages', 'web', 'dist')
     );
   }
+
+  get appUrl(): string {
+    return this.config.get<string>('APP_URL') ?? `http://localhost:${this.port}`;
+  }
+
+  get jwtSecret(): string {
+    return this.config.getOrThrow('JWT_SECRET');
+  }
+
+  get accessTokenMinutes(): number {
+    return Number(this.config.getOrThrow('ACCESS_TOKEN_MINUTES'));
+  }
+
+  get refreshTokenDays(): number {
+    return Number(this.config.getOrThrow('REFRESH_TOKEN_DAYS'));
+  }
+
+  get signInLockAfter(): number {
+    return Number(this.config.getOrThrow('SIGN_IN_LOCK_AFTER'));
+  }
+
+  get signInLockMinutes(): number {
+    return Number(this.config.getOrThrow('SIGN_IN_LOCK_MINUTES'));
+  }
+
+  get signInThrottlePerMinute(): number {
+    return Number(this.config.getOrThrow('SIGN_IN_THROTTLE_PER_MINUTE'));
+  }
+
+  get invitationDays(): number {
+    return Number(this.config.getOrThrow('INVITATION_DAYS'));
+  }
+
+  get passwordResetMinutes(): number {
+    return Number(this.config.getOrThrow('PASSWORD_RESET_MINUTES'));
+  }
+
+  get smtpUrl(): string | undefined {
+    return this.config.get<string>('SMTP_URL');
+  }
+
+  get mailFrom(): string {
+    return this.config.getOrThrow('MAIL_FROM');
+  }
 }

@@ -26,4 +26,24 @@ export const envValidationSchema = Joi.object({
   // Serve the built web app from this process; defaults to on in production.
   SERVE_WEB: Joi.boolean().optional(),
   WEB_DIST_DIR: Joi.string().optional(),
+  // Address people reach the app at; links in e-mails start with it.
+  APP_URL: Joi.string()
+    .uri({ scheme: ['http', 'https'] })
+    .optional(),
+  JWT_SECRET: Joi.string()
+    .min(32)
+    .required()
+    .messages({ 'any.required': 'JWT_SECRET is required (npm start generates one in .data/).' }),
+  ACCESS_TOKEN_MINUTES: Joi.number().integer().min(1).max(60).default(15),
+  REFRESH_TOKEN_DAYS: Joi.number().integer().min(1).max(90).default(14),
+  SIGN_IN_LOCK_AFTER: Joi.number().integer().min(3).max(20).default(5),
+  SIGN_IN_LOCK_MINUTES: Joi.number().integer().min(1).max(1440).default(15),
+  SIGN_IN_THROTTLE_PER_MINUTE: Joi.number().integer().min(1).max(1000).default(10),
+  INVITATION_DAYS: Joi.number().integer().min(1).max(30).default(7),
+  PASSWORD_RESET_MINUTES: Joi.number().integer().min(5).max(1440).default(60),
+  // Without it, mail goes to the in-process catcher whose messages admins read in the app.
+  SMTP_URL: Joi.string()
+    .uri({ scheme: ['smtp', 'smtps'] })
+    .optional(),
+  MAIL_FROM: Joi.string().default('Tallyloom <no-reply@tallyloom.example>'),
 });

@@ -1,5 +1,6 @@
 import { Controller, Get, HttpStatus, Res } from '@nestjs/common';
 import { ApiOkResponse, ApiServiceUnavailableResponse, ApiTags } from '@nestjs/swagger';
+import { Public } from '../common/access/access.decorators';
 import type { Response } from 'express';
 import { HealthReportDto } from './dto/health-report.dto';
 import { HealthService } from './health.service';
@@ -10,6 +11,7 @@ export class HealthController {
   constructor(private readonly health: HealthService) {}
 
   @Get()
+  @Public()
   @ApiOkResponse({ type: HealthReportDto, description: 'Database and queue are up' })
   @ApiServiceUnavailableResponse({
     type: HealthReportDto,

@@ -1,19 +1,30 @@
 import { Controller, Get } from '@nestjs/common';
-import { ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { Allow } from '../common/access/access.decorators';
+import { Ctx, type SignedInContext } from '../common/context/request-context';
+import { IdParam } from '../common/pipes/id-param';
 import { RegionDto } from './dto/region.dto';
 import { RegionsService } from './regions.service';
 
 @ApiTags('network')
+@ApiBearerAuth()
 @Controller('regions')
+@Allow('network.read')
 export class RegionsController {
   constructor(private readonly regions: RegionsService) {}
 
   @Get()
   @ApiOkResponse({
     type: [RegionDto],
-    description: 'Every region of the network, by name, with its number of chapters',
+    description: 'The regions in your scope, by name, with their number of chapters',
   })
-  list(): Promise<RegionDto[]> {
-    return this.regions.list();
+  list(@Ctx() context: SignedInContext): Promise<RegionDto[]> {
+    return this.regions.list(context.actor);
+  }
+
+  @Get(':id')
+  @ApiOkResponse({ type: RegionDto })
+  get(@IdParam() id: number, @Ctx() context: SignedInContext): Promise<RegionDto> {
+    return this.regions.get(context.actor, id);
   }
 }

@@ -1,0 +1,29 @@
+import { ROLES, type Role } from './roles';
+
+/**
+ * Who may do what, by capability. The server's route guard and the web app's navigation read
+ * this one table, so a button is never shown for something the server would refuse (and the
+ * server never trusts the button).
+ */
+export const POLICIES = {
+  /** Read the network structure: regions and chapters (in scope). */
+  'network.read': [...ROLES],
+  /** Invite people, change their role or scope, deactivate them. */
+  'people.manage': ['network_admin'],
+  /** Read the e-mails the development mail catcher has captured. */
+  'outbox.read': ['network_admin'],
+  /** Read the audit log. */
+  'audit.read': ['network_admin', 'auditor'],
+  /** See the system status page (database, queues). */
+  'system.read': ['network_admin', 'national_staff'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Policy = keyof typeof POLICIES;
+
+export function rolesFor(policy: Policy): readonly Role[] {
+  return POLICIES[policy];
+}
+
+export function can(role: Role | null | undefined, policy: Policy): boolean {
+  return !!role && (POLICIES[policy] as readonly Role[]).includes(role);
+}

@@ -1,0 +1,44 @@
+import { Injectable } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import type { Transaction } from 'sequelize';
+import type { RequestContext } from '../common/context/request-context';
+import { AuditEntry } from './models/audit-entry.model';
+
+export interface AuditRecord {
+  /** Dotted verb, e.g. "user.invited", "auth.sign_in_failed". */
+  action: string;
+  entityType: string;
+  entityId?: string | number | null;
+  before?: Record<string, unknown> | null;
+  after?: Record<string, unknown> | null;
+  /** For events without a signed-in actor (a failed sign-in): who it concerned. */
+  actorEmail?: string | null;
+}
+
+@Injectable()
+export class AuditService {
+  constructor(@InjectModel(AuditEntry) private readonly entries: typeof AuditEntry) {}
+
+  /** Writes one entry inside the caller's transaction, so the change and its record stand or fall together. */
+  async record(
+    context: RequestContext,
+    record: AuditRecord,
+    transaction?: Transaction,
+  ): Promise<void> {
+    await this.entries.create(
+      {
+        occurredAt: new Date(),
+        actorUserId: context.actor?.id ?? null,
+        actorEmail: context.actor?.email ?? record.actorEmail ?? null,
+        action: record.action,
+        entityType: record.entityType,
+        entityId: record.entityId == null ? null : String(record.entityId),
+        beforeJson: record.before ?? null,
+        afterJson: record.after ?? null,
+        requestId: context.requestId,
+        ip: context.ip,
+      },
+      { transaction },
+    );
+  }
+}
