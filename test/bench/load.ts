@@ -14,8 +14,14 @@ export async function load(
   path: string,
   connections: number,
   seconds: number,
+  headers: Record<string, string> = {},
 ): Promise<LoadResult> {
-  const result = await autocannon({ url: `${baseUrl}${path}`, connections, duration: seconds });
+  const result = await autocannon({
+    url: `${baseUrl}${path}`,
+    connections,
+    duration: seconds,
+    headers,
+  });
   const latency = result.latency as unknown as Record<string, number>;
   return {
     path,

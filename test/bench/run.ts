@@ -1,14 +1,17 @@
-import { exitWith, step } from '../../db/lifecycle/console';
 import { appSecrets } from '../../db/lifecycle/app-secrets';
-import { runCommand } from '../../db/lifecycle/run-command';
+import { LifecycleError, exitWith, step } from '../../db/lifecycle/console';
+import { findFreePort } from '../../db/lifecycle/ports';
+import { runCommand, startLongRunning, stopLongRunning } from '../../db/lifecycle/run-command';
 import { startServers } from '../../db/lifecycle/servers';
-import { shutdown } from '../../db/lifecycle/shutdown';
-import { startTestApp } from '../e2e/support/test-app';
+import { onShutdown, shutdown } from '../../db/lifecycle/shutdown';
+import { waitForHttp } from '../../db/lifecycle/wait-for-http';
+import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
 import { load } from './load';
 
 /**
- * `npm run bench`: figures as ratios against a baseline measured in the same run, never as
- * absolute times, so they compare across machines. Later capabilities add their own sections.
+ * `npm run bench`: the production build of the API on throwaway servers, measured as ratios
+ * against a baseline taken in the same run, never as absolute times, so figures compare across
+ * machines. Later capabilities add their own sections.
  */
 async function main(): Promise<void> {
   const seconds = Number(process.env.BENCH_SECONDS ?? 5);
@@ -16,20 +19,51 @@ async function main(): Promise<void> {
   const env = await startServers('throwaway');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], env, 'Migrations');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'seed'], env, 'Demo seed');
-  Object.assign(process.env, env, appSecrets(false), { NODE_ENV: 'production', LOG_LEVEL: 'warn' });
+  step('Building core and API…');
+  await runCommand(
+    'npm',
+    ['run', '--silent', 'build', '-w', 'packages/core'],
+    {},
+    'The core build',
+  );
+  await runCommand('npm', ['run', '--silent', 'build', '-w', 'services/api'], {}, 'The API build');
 
-  const testApp = await startTestApp();
-  await testApp.app.listen(0, '127.0.0.1');
-  const baseUrl = (await testApp.app.getUrl()).replace('[::1]', '127.0.0.1');
+  const port = await findFreePort();
+  const api = startLongRunning('node', ['services/api/dist/main.js'], {
+    ...env,
+    ...appSecrets(false),
+    NODE_ENV: 'production',
+    LOG_LEVEL: 'warn',
+    PORT: String(port),
+    SERVE_WEB: 'false',
+    // The bench signs in once; the throttle is not what is measured.
+    SIGN_IN_THROTTLE_PER_MINUTE: '1000',
+  });
+  let exited = false;
+  api.once('exit', () => (exited = true));
+  onShutdown(() => stopLongRunning(api));
+  const baseUrl = `http://127.0.0.1:${port}`;
+  if (!(await waitForHttp(`${baseUrl}/api/health`, 60_000, () => exited))) {
+    throw new LifecycleError('The API did not start for the benchmark.');
+  }
+
+  // Signed in as national staff: the network routes run the full guard and scope path.
+  const staff = DEMO_SIGN_INS.find((person) => person.role === 'national_staff')!;
+  const signIn = await fetch(`${baseUrl}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ email: staff.email, password: staff.password }),
+  });
+  const { accessToken } = (await signIn.json()) as { accessToken: string };
+  const auth = { authorization: `Bearer ${accessToken}` };
 
   step(`Load: ${connections} connections × ${seconds} s per route…`);
   await load(baseUrl, '/api/health', connections, 1); // warm-up
   const baseline = await load(baseUrl, '/api/health', connections, seconds);
   const routes = [
-    await load(baseUrl, '/api/regions', connections, seconds),
-    await load(baseUrl, '/api/chapters', connections, seconds),
+    await load(baseUrl, '/api/regions', connections, seconds, auth),
+    await load(baseUrl, '/api/chapters', connections, seconds, auth),
   ];
-  await testApp.close();
 
   const rows = [baseline, ...routes].map((r) => ({
     route: r.path,
