@@ -32,11 +32,31 @@ export function checkPassword(password: string, context: PasswordContext = {}): 
   if (context.commonPasswords?.has(normalised)) {
     problems.push('This password is on a list of commonly used passwords; choose another.');
   }
-  const words = (context.accountWords ?? [])
-    .flatMap((word) => word.toLowerCase().split(/[@.\s_-]+/))
-    .filter((word) => word.length >= 4);
-  if (words.some((word) => normalised === word || normalised.replace(/[^a-z0-9]/g, '') === word)) {
+  if (accountDerivatives(context.accountWords ?? []).has(lettersAndDigits(normalised))) {
     problems.push('Do not use your name or e-mail address as the password.');
   }
   return problems;
+}
+
+function lettersAndDigits(value: string): string {
+  return value.replace(/[^\p{L}\p{N}]/gu, '');
+}
+
+/**
+ * The account's own words and what is commonly derived from them (NIST: "the username, and
+ * derivatives thereof"): the whole value, an e-mail's local part, and each single word, all
+ * compared without punctuation or spaces, so "lead.alderfalls", "LeadAlderfalls" and
+ * "Marguerite Osei" all count.
+ */
+function accountDerivatives(accountWords: string[]): Set<string> {
+  const derived = new Set<string>();
+  for (const raw of accountWords) {
+    const word = raw.normalize('NFKC').toLowerCase();
+    const localPart = word.split('@')[0] ?? word;
+    for (const candidate of [word, localPart, ...word.split(/[@.\s_-]+/)]) {
+      const compact = lettersAndDigits(candidate);
+      if (compact.length >= 4) derived.add(compact);
+    }
+  }
+  return derived;
 }

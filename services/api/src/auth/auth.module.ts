@@ -42,6 +42,6 @@ import { RefreshTokenService } from './tokens/refresh-token.service';
     // Deny by default, for every route of every module.
     { provide: APP_GUARD, useClass: AccessGuard },
   ],
-  exports: [OneTimeLinkService, PasswordPolicyService],
+  exports: [OneTimeLinkService, PasswordPolicyService, RefreshTokenService],
 })
 export class AuthModule {}

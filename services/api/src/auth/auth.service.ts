@@ -12,13 +12,12 @@ import type { OneTimeLinkInfo, SessionResponse } from '@tallyloom/core';
 import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { AuditService } from '../audit/audit.service';
-import { Chapter } from '../chapters/models/chapter.model';
 import type { RequestContext, SignedInContext } from '../common/context/request-context';
 import { AppConfig } from '../config/app-config';
 import { MailSender } from '../mail/mail-sender';
-import { Region } from '../regions/models/region.model';
 import { User } from '../users/models/user.model';
 import { toSessionUser } from '../users/user.mappers';
+import { WITH_SCOPE_NAMES } from '../users/models/user-scope.include';
 import { passwordResetMail } from './auth-mails';
 import { OneTimeLinkService } from './links/one-time-link.service';
 import { decoyPasswordHash, hashPassword, verifyPassword } from './passwords/password-hasher';
@@ -355,10 +354,7 @@ export class AuthService {
 
   private async loadUser(id: number, transaction?: Transaction): Promise<User> {
     const user = await this.users.findByPk(id, {
-      include: [
-        { model: Region, attributes: ['id', 'name'] },
-        { model: Chapter, attributes: ['id', 'name', 'regionId'] },
-      ],
+      include: WITH_SCOPE_NAMES,
       transaction,
     });
     if (!user) throw new UnauthorizedException('Your account no longer exists.');

@@ -17,7 +17,7 @@ export function toSessionUser(user: User): SessionUser {
     displayName: user.displayName,
     role: user.role,
     regionId: user.regionId ?? user.chapter?.regionId ?? null,
-    regionName: user.region?.name ?? null,
+    regionName: user.region?.name ?? user.chapter?.region?.name ?? null,
     chapterId: user.chapterId,
     chapterName: user.chapter?.name ?? null,
   };

@@ -7,11 +7,12 @@ import {
 } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { ROLE_SCOPE, type Role, type UserStatus } from '@tallyloom/core';
-import { Op, type Transaction, type WhereOptions } from 'sequelize';
+import { Op, UniqueConstraintError, type Transaction, type WhereOptions } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { AuditService } from '../audit/audit.service';
 import { invitationMail } from '../auth/auth-mails';
 import { OneTimeLinkService } from '../auth/links/one-time-link.service';
+import { RefreshTokenService } from '../auth/tokens/refresh-token.service';
 import { Chapter } from '../chapters/models/chapter.model';
 import type { SignedInContext } from '../common/context/request-context';
 import { MailSender, type OutgoingMail } from '../mail/mail-sender';
@@ -24,12 +25,15 @@ import type {
   UserPageDto,
 } from './dto/user.dto';
 import { User } from './models/user.model';
+import { WITH_SCOPE_NAMES } from './models/user-scope.include';
 import { auditableUser, toUserView } from './user.mappers';
 
-const WITH_SCOPE_NAMES = [
-  { model: Region, attributes: ['id', 'name'] },
-  { model: Chapter, attributes: ['id', 'name', 'regionId'] },
-];
+function emailInUse(): ConflictException {
+  return new ConflictException({
+    message: 'Someone with this e-mail address is already in Tallyloom.',
+    fields: [{ field: 'email', messages: ['This e-mail address is already in use.'] }],
+  });
+}
 
 function fieldError(field: string, message: string): BadRequestException {
   return new BadRequestException({
@@ -48,6 +52,7 @@ export class UsersService {
     @InjectModel(Region) private readonly regions: typeof Region,
     @InjectModel(Chapter) private readonly chapters: typeof Chapter,
     private readonly links: OneTimeLinkService,
+    private readonly refreshTokens: RefreshTokenService,
     private readonly audit: AuditService,
     private readonly mail: MailSender,
   ) {}
@@ -84,36 +89,37 @@ export class UsersService {
 
   async invite(context: SignedInContext, body: InviteUserDto): Promise<UserDto> {
     const scope = await this.resolveScope(body.role, body.regionId ?? null, body.chapterId ?? null);
-    const { user, mail } = await this.sequelize.transaction(async (transaction) => {
-      if (await this.users.findOne({ where: { email: body.email }, transaction })) {
-        throw new ConflictException({
-          message: 'Someone with this e-mail address is already in Tallyloom.',
-          fields: [{ field: 'email', messages: ['This e-mail address is already in use.'] }],
-        });
-      }
-      const created = await this.users.create(
-        {
-          email: body.email,
-          displayName: body.displayName,
-          role: body.role,
-          ...scope,
-          active: true,
-          invitedAt: new Date(),
-        },
-        { transaction },
-      );
-      await this.audit.record(
-        context,
-        {
-          action: 'user.invited',
-          entityType: 'user',
-          entityId: created.id,
-          after: auditableUser(created),
-        },
-        transaction,
-      );
-      return { user: created, mail: await this.invitationFor(created, context, transaction) };
-    });
+    const { user, mail } = await this.sequelize
+      .transaction(async (transaction) => {
+        if (await this.users.findOne({ where: { email: body.email }, transaction }))
+          throw emailInUse();
+        const created = await this.users.create(
+          {
+            email: body.email,
+            displayName: body.displayName,
+            role: body.role,
+            ...scope,
+            active: true,
+            invitedAt: new Date(),
+          },
+          { transaction },
+        );
+        await this.audit.record(
+          context,
+          {
+            action: 'user.invited',
+            entityType: 'user',
+            entityId: created.id,
+            after: auditableUser(created),
+          },
+          transaction,
+        );
+        return { user: created, mail: await this.invitationFor(created, context, transaction) };
+      })
+      .catch((error: unknown) => {
+        // Two invitations for one address at the same moment: the unique index decides.
+        throw error instanceof UniqueConstraintError ? emailInUse() : error;
+      });
     await this.sendAfterCommit(mail);
     return this.get(user.id);
   }
@@ -147,6 +153,10 @@ export class UsersService {
     const before = auditableUser(user);
     await this.sequelize.transaction(async (transaction) => {
       await user.update(changes, { transaction });
+      // A deactivated person's sessions end for good; reactivation does not bring them back.
+      if (body.active === false) {
+        await this.refreshTokens.revokeAllForUser(user.id, 'deactivated', transaction);
+      }
       const after = auditableUser(user);
       if (JSON.stringify(before) === JSON.stringify(after)) return;
       const action =
