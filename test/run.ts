@@ -4,7 +4,8 @@ import { exitWith, step } from '../db/lifecycle/console';
 import { appSecrets } from '../db/lifecycle/app-secrets';
 import { ensureDebianPackage } from '../db/lifecycle/debian';
 import { runCommand } from '../db/lifecycle/run-command';
-import { startServers, throwawayRoot } from '../db/lifecycle/servers';
+import { withFileLock } from '../db/lifecycle/file-lock';
+import { DATA_ROOT, startServers, throwawayRoot } from '../db/lifecycle/servers';
 import { shutdown } from '../db/lifecycle/shutdown';
 
 /**
@@ -31,7 +32,27 @@ async function main(): Promise<number> {
     {},
     'The core build',
   );
-  await runCommand('npm', ['run', '--silent', 'build', '-w', 'packages/web'], {}, 'The web build');
+  // Each run builds into its own folder, so runs side by side never share a half-written build.
+  const webDist = join(throwawayRoot(), 'web-dist');
+  await withFileLock(join(DATA_ROOT, 'web-build.lock'), () =>
+    runCommand(
+      'npm',
+      [
+        'run',
+        '--silent',
+        'build',
+        '-w',
+        'packages/web',
+        '--',
+        '--outDir',
+        webDist,
+        '--emptyOutDir',
+      ],
+      {},
+      'The web build',
+    ),
+  );
+  Object.assign(testEnv, { WEB_DIST_DIR: webDist });
 
   const tally = { passed: 0, failed: 0 };
   const jestReport = join(reports, 'jest.json');

@@ -1,6 +1,13 @@
 import type { Migration } from './context';
 import { createRegionsAndChapters } from './20261201-0001-create-regions-and-chapters';
 import { createPeopleAndAuditLog } from './20261201-0002-create-people-and-audit-log';
+import { createNetworkSetup } from './20261201-0003-create-network-setup';
+import { createParcelReceipts } from './20261201-0004-create-parcel-receipts';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
-export const MIGRATIONS: Migration[] = [createRegionsAndChapters, createPeopleAndAuditLog];
+export const MIGRATIONS: Migration[] = [
+  createRegionsAndChapters,
+  createPeopleAndAuditLog,
+  createNetworkSetup,
+  createParcelReceipts,
+];

@@ -2,6 +2,8 @@ import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
 import { hashPassword } from '../../services/api/src/auth/passwords/password-hasher';
 import { DEMO_REGIONS } from './demo-scenario';
 import { DEMO_SIGN_INS } from './demo-sign-ins';
+import { seedNetworkSetup } from './seed-network-setup';
+import { seedReceipts } from './seed-receipts';
 
 export interface SeedOutcome {
   seeded: boolean;
@@ -91,6 +93,9 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
       });
     }
     await qi.bulkInsert('users', people, { transaction });
+    await seedNetworkSetup(sequelize, transaction);
   });
+  // Receipts come in their own transactions: two years of parcels is a lot of rows.
+  await seedReceipts(sequelize);
   return { seeded: true, regions: DEMO_REGIONS.length, chapters, people: DEMO_SIGN_INS.length };
 }

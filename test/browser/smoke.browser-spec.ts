@@ -3,7 +3,8 @@ import type { Browser } from 'playwright-core';
 import { startTestApp, type TestApp } from '../e2e/support/test-app';
 import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
 
-const WEB_DIST = join(__dirname, '..', '..', 'packages', 'web', 'dist');
+/** `npm test` builds the web app into a folder of its own run; the default is `npm run build`'s. */
+const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packages', 'web', 'dist');
 
 describe('smoke: the app in Chromium', () => {
   let testApp: TestApp;

@@ -3,7 +3,8 @@ import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { startTestApp, type TestApp } from './support/test-app';
 
-const WEB_DIST = join(__dirname, '..', '..', 'packages', 'web', 'dist');
+/** `npm test` builds the web app into a folder of its own run; the default is `npm run build`'s. */
+const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packages', 'web', 'dist');
 
 describe('unknown routes, OpenAPI and the served web app', () => {
   let testApp: TestApp;

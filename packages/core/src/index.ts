@@ -13,3 +13,5 @@ export * from './units/mass';
 export * from './panels/panel';
 export * from './panels/blanket-size';
 export * from './panels/panel-check';
+export * from './contract/network-setup';
+export * from './contract/receipts';

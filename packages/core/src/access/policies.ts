@@ -8,6 +8,19 @@ import { ROLES, type Role } from './roles';
 export const POLICIES = {
   /** Read the network structure: regions and chapters (in scope). */
   'network.read': [...ROLES],
+  /** Set up regions, chapters, partner agencies, campaigns, blanket sizes and settings. */
+  'network.manage': ['network_admin'],
+  /** Read parcel receipts and their scans (in scope); grant writers see aggregates only. */
+  'receipts.read': ['network_admin', 'national_staff', 'regional_coordinator', 'chapter_lead', 'auditor'],
+  /** Log, correct and import parcel receipts (chapter leads for their own chapter). */
+  'receipts.write': ['network_admin', 'national_staff', 'chapter_lead'],
+  /**
+   * See senders' names, e-mails and addresses (BRIEF §2): the receiving chapter, national staff,
+   * admins and auditors. Regional coordinators and grant writers never do.
+   */
+  'senders.read': ['network_admin', 'national_staff', 'chapter_lead', 'auditor'],
+  /** Erase a sender's personal data while keeping the counts. */
+  'senders.erase': ['network_admin'],
   /** Invite people, change their role or scope, deactivate them. */
   'people.manage': ['network_admin'],
   /** Read the e-mails the development mail catcher has captured. */
