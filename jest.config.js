@@ -30,7 +30,6 @@ module.exports = {
       ...shared,
       displayName: 'browser',
       testMatch: ['<rootDir>/test/browser/**/*.browser-spec.ts'],
-      testTimeout: 60000,
     },
   ],
 };

@@ -1,4 +1,5 @@
-import { existsSync, mkdirSync, readFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { exitWith, step } from '../db/lifecycle/console';
 import { appSecrets } from '../db/lifecycle/app-secrets';
@@ -6,7 +7,7 @@ import { ensureDebianPackage } from '../db/lifecycle/debian';
 import { runCommand } from '../db/lifecycle/run-command';
 import { withFileLock } from '../db/lifecycle/file-lock';
 import { DATA_ROOT, startServers, throwawayRoot } from '../db/lifecycle/servers';
-import { shutdown } from '../db/lifecycle/shutdown';
+import { onShutdown, shutdown } from '../db/lifecycle/shutdown';
 
 /**
  * `npm test`: a throwaway MariaDB and Redis, migrations and demo data, the web build, then every
@@ -20,7 +21,14 @@ async function main(): Promise<number> {
 
   ensureDebianPackage('chromium', 'chromium', 'the browser tests');
   const env = await startServers('throwaway');
-  const testEnv = { ...env, ...appSecrets(false), NODE_ENV: 'test', LOG_LEVEL: 'warn' };
+  const testEnv = {
+    ...env,
+    ...appSecrets(false),
+    NODE_ENV: 'test',
+    LOG_LEVEL: 'warn',
+    // Uploads and the demo seed's scans stay inside this run's folder.
+    UPLOADS_DIR: join(throwawayRoot(), 'uploads'),
+  };
 
   step('Applying migrations and loading the demo network…');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], testEnv, 'Migrations');
@@ -33,7 +41,9 @@ async function main(): Promise<number> {
     'The core build',
   );
   // Each run builds into its own folder, so runs side by side never share a half-written build.
-  const webDist = join(throwawayRoot(), 'web-dist');
+  // Outside .data/: Express's sendFile refuses any path with a dot-folder in it (the SPA fallback).
+  const webDist = join(tmpdir(), `tallyloom-web-${process.pid}`);
+  onShutdown(() => rmSync(webDist, { recursive: true, force: true }));
   await withFileLock(join(DATA_ROOT, 'web-build.lock'), () =>
     runCommand(
       'npm',

@@ -3,15 +3,24 @@ import { useMemo } from 'react';
 import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { LoadingState } from '@/components/ui/loading-state';
 import { paths } from '@/config/paths';
+import { requireAccess, routeAccess, type AccessHandle } from './route-access';
+import { AcceptInvitationRoute } from './routes/accept-invitation';
+import { AccountRoute } from './routes/account';
 import { AppRoot } from './routes/app-root';
+import { ForgotPasswordRoute } from './routes/forgot-password';
 import { networkLoader, NetworkRoute } from './routes/network';
 import { NotFoundRoute } from './routes/not-found';
+import { PublicRoot } from './routes/public-root';
+import { ResetPasswordRoute } from './routes/reset-password';
+import { RootRoute, rootLoader } from './routes/root';
 import { RouteErrorPage } from './routes/route-error';
-import { SignInRoute } from './routes/sign-in';
+import { signInLoader, SignInRoute } from './routes/sign-in';
 import { StatusRoute } from './routes/status';
 
 /**
  * The route tree, shared by the browser router and the tests' memory router.
+ * The root settles the session first; the pages used without one sit in the quiet public
+ * frame, every other page in the shell, guarded by the policy it declares in `handle`.
  * Each page has its own error element so a broken page keeps the shell and its navigation.
  */
 export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
@@ -19,19 +28,79 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
   return [
     {
       path: paths.network.path,
-      element: <AppRoot />,
+      element: <RootRoute />,
+      loader: rootLoader,
       errorElement: <RouteErrorPage standalone />,
-      // Shown for the moment before the first loaders return, on a cold start only.
+      // Shown while the session is restored and the first loaders return, on a cold start only.
       hydrateFallbackElement: <LoadingState label="Opening Tallyloom…" />,
       children: [
         {
-          index: true,
-          element: <NetworkRoute />,
-          loader: networkLoader(queryClient),
-          errorElement: pageError,
+          element: <PublicRoot />,
+          children: [
+            {
+              path: paths.signIn.path,
+              element: <SignInRoute />,
+              loader: signInLoader,
+              errorElement: pageError,
+            },
+            {
+              path: paths.forgotPassword.path,
+              element: <ForgotPasswordRoute />,
+              errorElement: pageError,
+            },
+            {
+              path: paths.resetPassword.path,
+              element: <ResetPasswordRoute />,
+              errorElement: pageError,
+            },
+            {
+              path: paths.acceptInvitation.path,
+              element: <AcceptInvitationRoute />,
+              errorElement: pageError,
+            },
+          ],
         },
-        { path: paths.status.path, element: <StatusRoute />, errorElement: pageError },
-        { path: paths.signIn.path, element: <SignInRoute />, errorElement: pageError },
+        {
+          element: <AppRoot />,
+          children: [
+            {
+              index: true,
+              element: <NetworkRoute />,
+              loader: requireAccess(routeAccess.network, networkLoader(queryClient)),
+              errorElement: pageError,
+              handle: { access: routeAccess.network } satisfies AccessHandle,
+            },
+            {
+              path: paths.status.path,
+              element: <StatusRoute />,
+              loader: requireAccess(routeAccess.status),
+              errorElement: pageError,
+              handle: { access: routeAccess.status } satisfies AccessHandle,
+            },
+            {
+              path: paths.people.path,
+              // Only admins use these two pages: their code loads when first opened.
+              lazy: async () => ({ Component: (await import('./routes/people')).PeopleRoute }),
+              loader: requireAccess(routeAccess.people),
+              errorElement: pageError,
+              handle: { access: routeAccess.people } satisfies AccessHandle,
+            },
+            {
+              path: paths.outbox.path,
+              lazy: async () => ({ Component: (await import('./routes/outbox')).OutboxRoute }),
+              loader: requireAccess(routeAccess.outbox),
+              errorElement: pageError,
+              handle: { access: routeAccess.outbox } satisfies AccessHandle,
+            },
+            {
+              path: paths.account.path,
+              element: <AccountRoute />,
+              loader: requireAccess(routeAccess.account),
+              errorElement: pageError,
+              handle: { access: routeAccess.account } satisfies AccessHandle,
+            },
+          ],
+        },
         { path: '*', element: <NotFoundRoute />, errorElement: pageError },
       ],
     },

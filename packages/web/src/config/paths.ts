@@ -1,3 +1,14 @@
+/** A query string from the values that are set; "/" is left readable (`?next=/people`). */
+function query(values: Record<string, string | undefined>): string {
+  const parts = Object.entries(values)
+    .filter((entry): entry is [string, string] => entry[1] !== undefined && entry[1] !== '')
+    .map(([key, value]) => `${key}=${encodeURIComponent(value).replace(/%2F/g, '/')}`);
+  return parts.length ? `?${parts.join('&')}` : '';
+}
+
+/** What the sign-in page says above the form, after another page sent the person there. */
+export type SignInNotice = 'password-changed';
+
 /** Every route path in one place; components link through `getHref`, never a typed string. */
 export const paths = {
   network: {
@@ -8,8 +19,34 @@ export const paths = {
     path: '/status',
     getHref: () => '/status',
   },
+  people: {
+    path: '/people',
+    getHref: () => '/people',
+  },
+  outbox: {
+    path: '/outbox',
+    getHref: () => '/outbox',
+  },
+  account: {
+    path: '/account',
+    getHref: () => '/account',
+  },
   signIn: {
     path: '/sign-in',
-    getHref: () => '/sign-in',
+    /** `next`: the page to return to once signed in. */
+    getHref: ({ next, notice }: { next?: string; notice?: SignInNotice } = {}) =>
+      `/sign-in${query({ next, notice })}`,
+  },
+  forgotPassword: {
+    path: '/forgot-password',
+    getHref: () => '/forgot-password',
+  },
+  resetPassword: {
+    path: '/reset-password',
+    getHref: (token?: string) => `/reset-password${query({ token })}`,
+  },
+  acceptInvitation: {
+    path: '/accept-invitation',
+    getHref: (token?: string) => `/accept-invitation${query({ token })}`,
   },
 } as const;

@@ -1,5 +1,6 @@
-import type { ApiErrorBody, FieldProblem } from '@tallyloom/core';
+import type { ApiErrorBody, FieldProblem, SessionResponse } from '@tallyloom/core';
 import { appConfig } from '@/config/app-config';
+import { sessionStore } from './session/session-store';
 
 /** A failed API call, carrying the server's error body so a screen can show its message and request id. */
 export class ApiError extends Error {
@@ -31,6 +32,8 @@ export class ApiError extends Error {
 
 export type QueryParams = Record<string, string | number | boolean | undefined>;
 
+export type HttpMethod = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
 export interface RequestOptions {
   params?: QueryParams;
   signal?: AbortSignal;
@@ -39,9 +42,21 @@ export interface RequestOptions {
    * 503 with a full report when a service is down.
    */
   acceptStatuses?: number[];
+  /**
+   * For the endpoints that work without a session (sign-in, links, password reset): no bearer
+   * token, and a 401 is the answer itself, not a sign that the token needs renewing.
+   */
+  anonymous?: boolean;
+}
+
+export interface RequestWithBodyOptions extends RequestOptions {
+  body?: unknown;
 }
 
 const requestIdHeader = 'x-request-id';
+
+/** Answers that carry no body by design. */
+const emptyStatuses = new Set([202, 204, 205]);
 
 export function buildUrl(path: string, params?: QueryParams): string {
   const search = new URLSearchParams();
@@ -85,14 +100,31 @@ function errorBodyFrom(response: Response, payload: unknown): ApiErrorBody {
   };
 }
 
-/** GET a JSON resource from the API. Throws `ApiError`; shows nothing and redirects nowhere. */
-export async function apiGet<T>(path: string, options: RequestOptions = {}): Promise<T> {
-  const url = buildUrl(path, options.params);
-  let response: Response;
+/** The error a call gets when there is no session to send it with; nothing goes over the wire. */
+function noSessionError(path: string): ApiError {
+  return new ApiError({
+    statusCode: 401,
+    error: 'Unauthorized',
+    message: 'You are not signed in, or your session has ended. Sign in to carry on.',
+    path,
+  });
+}
+
+async function send(
+  method: HttpMethod,
+  path: string,
+  options: RequestWithBodyOptions,
+  accessToken?: string,
+): Promise<Response> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
   try {
-    response = await fetch(url, {
-      method: 'GET',
-      headers: { Accept: 'application/json' },
+    return await fetch(buildUrl(path, options.params), {
+      method,
+      headers,
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      // The refresh cookie rides along only to the API's own origin.
       credentials: 'same-origin',
       signal: options.signal,
     });
@@ -106,10 +138,16 @@ export async function apiGet<T>(path: string, options: RequestOptions = {}): Pro
       path,
     });
   }
+}
 
+async function readAnswer<T>(
+  response: Response,
+  path: string,
+  options: RequestOptions,
+): Promise<T> {
   const payload = await readJson(response);
   if (response.ok || options.acceptStatuses?.includes(response.status)) {
-    if (payload === undefined) {
+    if (payload === undefined && !emptyStatuses.has(response.status)) {
       throw new ApiError({
         statusCode: response.status,
         error: 'Unreadable answer',
@@ -121,4 +159,89 @@ export async function apiGet<T>(path: string, options: RequestOptions = {}): Pro
     return payload as T;
   }
   throw new ApiError(errorBodyFrom(response, payload));
+}
+
+let refreshInFlight: Promise<SessionResponse | null> | null = null;
+
+async function requestNewAccessToken(): Promise<SessionResponse | null> {
+  const path = '/auth/refresh';
+  const hadSession = sessionStore.getSnapshot().status === 'signed-in';
+  const response = await send('POST', path, {});
+  if (response.ok) {
+    const session = await readAnswer<SessionResponse>(response, path, {});
+    sessionStore.start(session);
+    return session;
+  }
+  // 401/403: the cookie no longer opens a session. Anything else (a throttle, a 5xx) says
+  // nothing about the session, so it stays as it was and the caller sees the error.
+  if (response.status === 401 || response.status === 403) {
+    sessionStore.end(hadSession ? 'expired' : 'none');
+    return null;
+  }
+  return readAnswer<never>(response, path, {});
+}
+
+/**
+ * Swaps the refresh cookie for a new access token. Single flight: however many calls need a
+ * new token at once, one request goes out and they all share its answer. Resolves to null
+ * (and ends the session) when the server no longer recognises the session.
+ */
+export function refreshSession(): Promise<SessionResponse | null> {
+  refreshInFlight ??= requestNewAccessToken().finally(() => {
+    refreshInFlight = null;
+  });
+  return refreshInFlight;
+}
+
+async function accessTokenFor(path: string): Promise<string> {
+  const session = sessionStore.getSnapshot();
+  if (session.status === 'signed-in') return session.accessToken;
+  if (session.status === 'signed-out') throw noSessionError(path);
+  // Not known yet (a fresh page): the refresh cookie may still open a session.
+  const restored = await refreshSession();
+  if (!restored) throw noSessionError(path);
+  return restored.accessToken;
+}
+
+/** After a 401: a token another call has renewed meanwhile, or a freshly renewed one. */
+async function renewedAccessToken(rejectedToken: string): Promise<string | null> {
+  const session = sessionStore.getSnapshot();
+  if (session.status === 'signed-in' && session.accessToken !== rejectedToken) {
+    return session.accessToken;
+  }
+  const renewed = await refreshSession();
+  return renewed?.accessToken ?? null;
+}
+
+/**
+ * Calls the API. Sends the bearer token; on a 401 renews it once and tries again. Throws
+ * `ApiError`; shows nothing and redirects nowhere (the screens read the session and decide).
+ */
+export async function apiRequest<T>(
+  method: HttpMethod,
+  path: string,
+  options: RequestWithBodyOptions = {},
+): Promise<T> {
+  if (options.anonymous) return readAnswer<T>(await send(method, path, options), path, options);
+
+  const token = await accessTokenFor(path);
+  let response = await send(method, path, options, token);
+  if (response.status === 401) {
+    const renewed = await renewedAccessToken(token);
+    if (renewed) response = await send(method, path, options, renewed);
+  }
+  return readAnswer<T>(response, path, options);
+}
+
+/** GET a JSON resource from the API. */
+export function apiGet<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  return apiRequest<T>('GET', path, options);
+}
+
+export function apiPost<T>(path: string, body?: unknown, options: RequestOptions = {}): Promise<T> {
+  return apiRequest<T>('POST', path, { ...options, body });
+}
+
+export function apiPatch<T>(path: string, body: unknown, options: RequestOptions = {}): Promise<T> {
+  return apiRequest<T>('PATCH', path, { ...options, body });
 }

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { formatCount, formatMonthYear, formatReportDueDay, formatUptime } from './format';
+import {
+  formatCount,
+  formatDateTime,
+  formatMonthYear,
+  formatReportDueDay,
+  formatUptime,
+} from './format';
 
 describe('formatting for screens', () => {
   it('puts thousands separators in counts', () => {
@@ -25,5 +31,11 @@ describe('formatting for screens', () => {
     expect(formatUptime(3 * 86_400 + 4 * 3_600 + 12 * 60)).toBe('3 days 4 hours');
     expect(formatUptime(2 * 3_600 + 5 * 60)).toBe('2 hours 5 minutes');
     expect(formatUptime(12)).toBe('less than a minute');
+  });
+
+  it('shows a moment as day, month, year and time, or "Never" when there is none', () => {
+    // A local time, so the check holds in any time zone the tests run in.
+    expect(formatDateTime('2026-03-14T09:05:00')).toBe('14 Mar 2026, 09:05');
+    expect(formatDateTime(null)).toBe('Never');
   });
 });

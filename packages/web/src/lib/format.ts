@@ -34,3 +34,10 @@ export function formatUptime(totalSeconds: number): string {
 export function formatTimeOfDay(timestamp: number): string {
   return format(timestamp, 'HH:mm:ss');
 }
+
+/** "2026-03-14T09:05:00Z" → "14 Mar 2026, 09:05" in the reader's time zone; null → "Never". */
+export function formatDateTime(isoTimestamp: string | null, never = 'Never'): string {
+  if (!isoTimestamp) return never;
+  const date = parseISO(isoTimestamp);
+  return isValid(date) ? format(date, 'd MMM yyyy, HH:mm') : isoTimestamp;
+}

@@ -1,6 +1,7 @@
 import '@testing-library/jest-dom/vitest';
 import { cleanup } from '@testing-library/react';
 import { afterEach } from 'vitest';
+import { resetSessionForTests } from '@/lib/session/session';
 
 // jsdom has no layout, so no scrolling; the router's scroll restoration calls it on every navigation.
 window.scrollTo = () => {};
@@ -13,7 +14,20 @@ class ResizeObserverStub {
 }
 window.ResizeObserver ??= ResizeObserverStub;
 
-// Without vitest globals, Testing Library cannot register its own cleanup.
+// jsdom lays nothing out: every offsetParent is null and the body measures 0 × 0. Fluent's focus
+// helper (tabster) then takes every element for hidden, so an opened dialog cannot move focus into
+// its first field, and it may stay aria-hidden. Give it the little layout it asks about.
+Object.defineProperty(HTMLElement.prototype, 'offsetParent', {
+  configurable: true,
+  get(this: HTMLElement) {
+    return this.parentElement;
+  },
+});
+HTMLBodyElement.prototype.getBoundingClientRect = () => new DOMRect(0, 0, 1280, 800);
+
+// Without vitest globals, Testing Library cannot register its own cleanup. The session lives in
+// memory for the whole page, as in a browser tab, so each test starts as a freshly opened one.
 afterEach(() => {
   cleanup();
+  resetSessionForTests();
 });

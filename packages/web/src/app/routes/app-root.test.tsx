@@ -1,21 +1,32 @@
-import { screen } from '@testing-library/react';
+import type { SessionUser } from '@tallyloom/core';
+import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
-import { demoChapters, demoRegions } from '@/testing/fixtures';
-import { jsonResponse, mockApi } from '@/testing/mock-api';
-import { renderApp } from '@/testing/render-app';
+import { demoChapters, demoPeople, demoRegions } from '@/testing/fixtures';
+import { emptyResponse, jsonResponse, mockApi, seenRequests } from '@/testing/mock-api';
+import { currentPath, renderApp } from '@/testing/render-app';
 
-function mockNetwork() {
-  mockApi({
+function mockNetwork(extra: Parameters<typeof mockApi>[0] = {}) {
+  return mockApi({
     '/api/regions': () => jsonResponse(demoRegions),
     '/api/chapters': () => jsonResponse(demoChapters),
+    ...extra,
   });
+}
+
+async function navigationLinks(as: SessionUser): Promise<string[]> {
+  mockNetwork();
+  renderApp(paths.network.getHref(), { as });
+  const nav = await screen.findByRole('navigation', { name: 'Main' });
+  return within(nav)
+    .getAllByRole('link')
+    .map((link) => link.textContent ?? '');
 }
 
 describe('the app shell', () => {
   it('names the product and the network, with header, navigation and main landmarks', async () => {
     mockNetwork();
-    renderApp(paths.network.getHref());
+    renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     const banner = await screen.findByRole('banner');
     expect(banner).toHaveTextContent('Tallyloom');
@@ -28,7 +39,7 @@ describe('the app shell', () => {
 
   it('lets a keyboard user skip straight to the content', async () => {
     mockNetwork();
-    const { user } = renderApp(paths.network.getHref());
+    const { user } = renderApp(paths.network.getHref(), { as: demoPeople.admin });
     await screen.findByRole('banner');
 
     await user.tab();
@@ -40,7 +51,7 @@ describe('the app shell', () => {
 
   it('moves between pages from the navigation', async () => {
     mockNetwork();
-    const { user } = renderApp(paths.network.getHref());
+    const { user } = renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     await user.click(await screen.findByRole('link', { name: 'System status' }));
     expect(
@@ -51,18 +62,69 @@ describe('the app shell', () => {
       'page',
     );
   });
+});
 
-  it('opens the sign-in placeholder, whose button explains why it is held back', async () => {
+describe('navigation by role', () => {
+  it('gives a network admin every page, People and the dev outbox included', async () => {
+    expect(await navigationLinks(demoPeople.admin)).toEqual([
+      'Network',
+      'System status',
+      'People',
+      'Dev outbox',
+    ]);
+  });
+
+  it('gives national staff the network and system status, but not People', async () => {
+    expect(await navigationLinks(demoPeople.staff)).toEqual(['Network', 'System status']);
+  });
+
+  it('gives a chapter lead neither People nor the dev outbox', async () => {
+    expect(await navigationLinks(demoPeople.chapterLead)).toEqual(['Network']);
+  });
+
+  it('does not show System status to a grant writer', async () => {
+    expect(await navigationLinks(demoPeople.grantWriter)).toEqual(['Network']);
+  });
+});
+
+describe('the signed-in person in the top bar', () => {
+  it("shows the person's name, role and chapter, with My account and Sign out", async () => {
     mockNetwork();
-    const { user } = renderApp(paths.network.getHref());
+    const { user, router } = renderApp(paths.network.getHref(), { as: demoPeople.chapterLead });
 
-    await user.click(await screen.findByRole('link', { name: 'Sign in' }));
+    const banner = await screen.findByRole('banner');
+    const menuButton = within(banner).getByRole('button', { name: /Dana Whitlock/ });
+    expect(menuButton).toHaveTextContent('Chapter lead · Alder Falls');
+
+    await user.click(menuButton);
+    await user.click(await screen.findByRole('menuitem', { name: 'My account' }));
+    expect(currentPath(router)).toBe(paths.account.getHref());
+  });
+
+  it('says "Whole network" for a role that reaches everything', async () => {
+    mockNetwork();
+    renderApp(paths.network.getHref(), { as: demoPeople.auditor });
+
+    const banner = await screen.findByRole('banner');
+    expect(within(banner).getByRole('button', { name: /Oskar Lind/ })).toHaveTextContent(
+      'Auditor · Whole network',
+    );
+  });
+
+  it('signs out: tells the server, forgets the data and goes to sign-in', async () => {
+    const fetchMock = mockNetwork({ 'POST /api/auth/sign-out': () => emptyResponse(204) });
+    const { user, router, queryClient } = renderApp(paths.network.getHref(), {
+      as: demoPeople.admin,
+    });
+    await screen.findByRole('table', { name: 'Regions' });
+
+    await user.click(screen.getByRole('button', { name: /Maren Holt/ }));
+    await user.click(await screen.findByRole('menuitem', { name: 'Sign out' }));
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Sign in' })).toBeInTheDocument();
-    expect(screen.getByLabelText('E-mail')).toHaveAttribute('type', 'email');
-    expect(screen.getByLabelText('Password')).toHaveAttribute('type', 'password');
-    const submit = screen.getByRole('button', { name: 'Sign in' });
-    expect(submit).toHaveAttribute('aria-disabled', 'true');
-    expect(submit).toHaveAccessibleDescription(/comes with accounts and roles/);
+    expect(screen.getByText('You have signed out.')).toBeInTheDocument();
+    expect(currentPath(router)).toBe(paths.signIn.getHref());
+    expect(seenRequests(fetchMock, '/api/auth/sign-out')).toHaveLength(1);
+    expect(queryClient.getQueryCache().getAll()).toEqual([]);
   });
 });

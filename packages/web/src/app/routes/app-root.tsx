@@ -1,30 +1,114 @@
-import { Home20Regular, Pulse20Regular, Person20Regular } from '@fluentui/react-icons';
-import { Outlet, ScrollRestoration } from 'react-router-dom';
+import {
+  Home20Regular,
+  MailInbox20Regular,
+  People20Regular,
+  Pulse20Regular,
+} from '@fluentui/react-icons';
+import { can, ROLE_LABELS, rolesFor, type SessionUser } from '@tallyloom/core';
+import type { ReactNode } from 'react';
+import { Navigate, Outlet, useLocation, useMatches } from 'react-router-dom';
 import { AppShell, type AppNavItem } from '@/components/ui/app-shell';
 import { LinkButton } from '@/components/ui/link-button';
+import { NoPermissionState } from '@/components/ui/no-permission-state';
 import { appConfig } from '@/config/app-config';
 import { paths } from '@/config/paths';
+import { UserMenu } from '@/features/auth/components/user-menu';
+import { scopeLabel } from '@/lib/scope';
+import { useSession } from '@/lib/session/use-session';
+import { accessOfMatches, mayOpen, routeAccess, type RouteAccess } from '../route-access';
 
-const navItems: AppNavItem[] = [
-  { label: 'Network', to: paths.network.getHref(), icon: Home20Regular, end: true },
-  { label: 'System status', to: paths.status.getHref(), icon: Pulse20Regular },
+const navItems: Array<AppNavItem & { access: RouteAccess }> = [
+  {
+    label: routeAccess.network.name,
+    to: paths.network.getHref(),
+    icon: Home20Regular,
+    end: true,
+    access: routeAccess.network,
+  },
+  {
+    label: routeAccess.status.name,
+    to: paths.status.getHref(),
+    icon: Pulse20Regular,
+    access: routeAccess.status,
+  },
+  {
+    label: routeAccess.people.name,
+    to: paths.people.getHref(),
+    icon: People20Regular,
+    access: routeAccess.people,
+  },
+  {
+    label: routeAccess.outbox.name,
+    to: paths.outbox.getHref(),
+    icon: MailInbox20Regular,
+    access: routeAccess.outbox,
+  },
 ];
 
-/** The layout route: the shell around whichever page the URL picks. */
-export function AppRoot() {
+/** The shell as a signed-in person sees it: only the pages their role opens, and who they are. */
+export function SignedInShell({ user, children }: { user: SessionUser; children: ReactNode }) {
   return (
     <AppShell
       productName={appConfig.productName}
       networkName={appConfig.networkName}
-      navItems={navItems}
-      headerActions={
-        <LinkButton to={paths.signIn.getHref()} appearance="subtle" icon={<Person20Regular />}>
-          Sign in
+      navItems={navItems.filter((item) => mayOpen(user, item.access))}
+      headerActions={<UserMenu user={user} />}
+    >
+      {children}
+    </AppShell>
+  );
+}
+
+function allowedRolesText(access: RouteAccess): string {
+  if (access.policy === null) return 'everyone signed in';
+  const labels = rolesFor(access.policy).map((role) => ROLE_LABELS[role]);
+  if (labels.length === 1) return `the ${labels[0]} role`;
+  return `the ${labels.slice(0, -1).join(', ')} and ${labels.at(-1)} roles`;
+}
+
+function NoPermission({ user, access }: { user: SessionUser; access: RouteAccess }) {
+  const home = can(user.role, 'network.read')
+    ? { to: paths.network.getHref(), label: `Back to ${routeAccess.network.name}` }
+    : { to: paths.account.getHref(), label: `Go to ${routeAccess.account.name}` };
+  return (
+    <NoPermissionState
+      pageName={access.name}
+      signedInAs={`${user.displayName} (${ROLE_LABELS[user.role]}, ${scopeLabel(user)})`}
+      allowedFor={allowedRolesText(access)}
+      action={
+        <LinkButton to={home.to} appearance="primary" icon={<Home20Regular />}>
+          {home.label}
         </LinkButton>
       }
-    >
-      <Outlet />
-      <ScrollRestoration />
-    </AppShell>
+    />
+  );
+}
+
+/**
+ * The layout of every signed-in page. When the session ends (signed out, or it ran out and
+ * could not be renewed) it takes the person to sign-in, with the way back unless they left on
+ * purpose; a page their role does not open shows why instead of the page.
+ */
+export function AppRoot() {
+  const session = useSession();
+  const location = useLocation();
+  const matches = useMatches();
+
+  if (session.status !== 'signed-in') {
+    const here = `${location.pathname}${location.search}`;
+    const leftOnPurpose = session.status === 'signed-out' && session.reason === 'signed-out';
+    const next = leftOnPurpose || here === paths.network.getHref() ? undefined : here;
+    return <Navigate to={paths.signIn.getHref({ next })} replace />;
+  }
+
+  const access = accessOfMatches(matches);
+  return (
+    <SignedInShell user={session.user}>
+      {access && !mayOpen(session.user, access) ? (
+        <NoPermission user={session.user} access={access} />
+      ) : (
+        <Outlet />
+      )}
+    </SignedInShell>
   );
 }

@@ -1,7 +1,7 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
-import { demoChapters, demoRegions } from '@/testing/fixtures';
+import { demoChapters, demoPeople, demoRegions } from '@/testing/fixtures';
 import { jsonResponse, mockApi, requestedUrls } from '@/testing/mock-api';
 import { renderApp } from '@/testing/render-app';
 
@@ -16,7 +16,7 @@ describe('Network page', () => {
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
     });
-    renderApp(paths.network.getHref());
+    renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Network' })).toBeInTheDocument();
     const regions = await screen.findByRole('table', { name: 'Regions' });
@@ -35,7 +35,7 @@ describe('Network page', () => {
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
     });
-    renderApp(paths.network.getHref());
+    renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     const chapters = await screen.findByRole('table', { name: 'Chapters' });
     const alderFalls = within(chapters).getByRole('row', { name: /Alder Falls/ });
@@ -52,7 +52,7 @@ describe('Network page', () => {
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
     });
-    const { user, router } = renderApp(paths.network.getHref());
+    const { user, router } = renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     await screen.findByRole('table', { name: 'Chapters' });
     await user.selectOptions(screen.getByRole('combobox', { name: 'Region' }), 'Riverlands');
@@ -71,7 +71,7 @@ describe('Network page', () => {
       '/api/regions': () => jsonResponse([]),
       '/api/chapters': () => jsonResponse([]),
     });
-    renderApp(paths.network.getHref());
+    renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     expect(await screen.findByRole('heading', { name: 'No regions yet' })).toBeInTheDocument();
     expect(screen.getByText(/A network admin sets up the regions first/)).toBeInTheDocument();
@@ -84,7 +84,7 @@ describe('Network page', () => {
       '/api/regions': () => new Promise<Response>(() => {}),
       '/api/chapters': () => new Promise<Response>(() => {}),
     });
-    renderApp(paths.network.getHref());
+    renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     expect(await screen.findByText('Loading regions…')).toBeInTheDocument();
   });
@@ -107,7 +107,7 @@ describe('Network page', () => {
           : jsonResponse(demoRegions),
       '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
     });
-    const { user } = renderApp(paths.network.getHref());
+    const { user } = renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
     const alert = await screen.findByRole('alert');
     expect(within(alert).getByRole('heading', { name: 'The network could not be loaded' }));

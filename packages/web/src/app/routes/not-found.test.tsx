@@ -1,6 +1,6 @@
 import { screen } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
-import { demoChapters, demoRegions } from '@/testing/fixtures';
+import { demoChapters, demoPeople, demoRegions } from '@/testing/fixtures';
 import { jsonResponse, mockApi } from '@/testing/mock-api';
 import { renderApp } from '@/testing/render-app';
 
@@ -10,9 +10,11 @@ describe('an unknown address', () => {
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': () => jsonResponse(demoChapters),
     });
-    const { user } = renderApp('/tallies/2026-13');
+    const { user } = renderApp('/tallies/2026-13', { as: demoPeople.admin });
 
-    expect(screen.getByRole('heading', { level: 1, name: 'Page not found' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Page not found' }),
+    ).toBeInTheDocument();
     expect(screen.getByText('/tallies/2026-13')).toBeInTheDocument();
     expect(screen.getByRole('navigation', { name: 'Main' })).toBeInTheDocument();
 

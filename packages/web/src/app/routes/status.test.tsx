@@ -1,14 +1,14 @@
 import { screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
-import { degradedHealth } from '@/testing/fixtures';
+import { degradedHealth, demoPeople } from '@/testing/fixtures';
 import { jsonResponse, mockApi } from '@/testing/mock-api';
 import { renderApp } from '@/testing/render-app';
 
 describe('System status page', () => {
   it('reads a 503 health report as "degraded", naming the service that is down', async () => {
     mockApi({ '/api/health': () => jsonResponse(degradedHealth, 503) });
-    renderApp(paths.status.getHref());
+    renderApp(paths.status.getHref(), { as: demoPeople.admin });
 
     expect(await screen.findByRole('status')).toHaveTextContent('Degraded: database down');
 
@@ -35,7 +35,7 @@ describe('System status page', () => {
           database: { status: 'up', version: '10.11.14-MariaDB' },
         }),
     });
-    renderApp(paths.status.getHref());
+    renderApp(paths.status.getHref(), { as: demoPeople.admin });
 
     expect(await screen.findByRole('status')).toHaveTextContent('All services are up');
     expect(screen.getByRole('region', { name: 'Database' })).toHaveTextContent('10.11.14-MariaDB');
@@ -45,7 +45,7 @@ describe('System status page', () => {
     mockApi({
       '/api/health': () => new Response('', { status: 504, statusText: 'Gateway Timeout' }),
     });
-    renderApp(paths.status.getHref());
+    renderApp(paths.status.getHref(), { as: demoPeople.admin });
 
     const alert = await screen.findByRole('alert');
     expect(alert).toHaveTextContent('The health check did not answer');

@@ -14,10 +14,12 @@ import {
   getSortedRowModel,
   useReactTable,
   type ColumnDef,
+  type PaginationState,
   type RowData,
   type SortingState,
 } from '@tanstack/react-table';
 import { useState } from 'react';
+import { PaginationBar } from './pagination-bar';
 
 declare module '@tanstack/react-table' {
   // Declaration merging needs the library's exact type parameters, used or not.
@@ -45,6 +47,19 @@ export interface DataTableProps<TRow> {
   labelledBy: string;
   getRowId: (row: TRow) => string;
   initialSorting?: SortingState;
+  /** Off for a page of server rows: sorting one page of many would mislead. */
+  enableSorting?: boolean;
+  /** Server-side pages: `data` is the current page, `rowCount` the total on the server. */
+  pagination?: ServerPagination;
+}
+
+export interface ServerPagination {
+  pageIndex: number;
+  pageSize: number;
+  rowCount: number;
+  onPageChange: (pageIndex: number) => void;
+  /** Names the page controls, e.g. "people". */
+  label: string;
 }
 
 /**
@@ -57,20 +72,33 @@ export function DataTable<TRow>({
   labelledBy,
   getRowId,
   initialSorting = [],
+  enableSorting = true,
+  pagination,
 }: DataTableProps<TRow>) {
   const styles = useStyles();
   const [sorting, setSorting] = useState<SortingState>(initialSorting);
+  const paginationState: PaginationState | undefined = pagination
+    ? { pageIndex: pagination.pageIndex, pageSize: pagination.pageSize }
+    : undefined;
   const table = useReactTable({
     data,
     columns,
-    state: { sorting },
+    state: { sorting, ...(paginationState ? { pagination: paginationState } : {}) },
+    enableSorting,
     onSortingChange: setSorting,
+    manualPagination: !!pagination,
+    rowCount: pagination?.rowCount,
+    onPaginationChange: (updater) => {
+      if (!pagination || !paginationState) return;
+      const next = typeof updater === 'function' ? updater(paginationState) : updater;
+      if (next.pageIndex !== paginationState.pageIndex) pagination.onPageChange(next.pageIndex);
+    },
     getRowId: (row) => getRowId(row),
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
   });
 
-  return (
+  const tableElement = (
     <Table size="small" aria-labelledby={labelledBy} className={styles.table}>
       <TableHeader>
         {table.getHeaderGroups().map((headerGroup) => (
@@ -113,5 +141,22 @@ export function DataTable<TRow>({
         ))}
       </TableBody>
     </Table>
+  );
+
+  if (!pagination) return tableElement;
+  return (
+    <>
+      {tableElement}
+      <PaginationBar
+        pageIndex={pagination.pageIndex}
+        pageSize={pagination.pageSize}
+        total={pagination.rowCount}
+        canPrevious={table.getCanPreviousPage()}
+        canNext={table.getCanNextPage()}
+        onPrevious={table.previousPage}
+        onNext={table.nextPage}
+        label={pagination.label}
+      />
+    </>
   );
 }

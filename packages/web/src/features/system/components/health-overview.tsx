@@ -8,6 +8,7 @@ import {
 import type { HealthReport } from '@tallyloom/core';
 import type { ReactNode } from 'react';
 import { ErrorState } from '@/components/ui/error-state';
+import { FactList } from '@/components/ui/fact-list';
 import { LoadingState } from '@/components/ui/loading-state';
 import { formatTimeOfDay, formatUptime } from '@/lib/format';
 import { useHealth } from '../api/get-health';
@@ -44,17 +45,7 @@ const useStyles = makeStyles({
     marginBottom: tokens.spacingVerticalS,
   },
   panelIcon: { color: tokens.colorBrandForeground1 },
-  facts: {
-    display: 'grid',
-    gridTemplateColumns: 'max-content 1fr',
-    columnGap: tokens.spacingHorizontalL,
-    rowGap: tokens.spacingVerticalXS,
-    margin: 0,
-    marginBottom: tokens.spacingVerticalS,
-  },
-  factRow: { display: 'contents' },
-  term: { color: tokens.colorNeutralForeground2 },
-  detail: { margin: 0, overflowWrap: 'anywhere' },
+  facts: { marginBottom: tokens.spacingVerticalS },
 });
 
 function ServicePanel({
@@ -84,16 +75,7 @@ function ServicePanel({
 
 function Facts({ rows }: { rows: Array<[string, ReactNode]> }) {
   const styles = useStyles();
-  return (
-    <dl className={styles.facts}>
-      {rows.map(([term, detail]) => (
-        <div key={term} className={styles.factRow}>
-          <dt className={styles.term}>{term}</dt>
-          <dd className={styles.detail}>{detail}</dd>
-        </div>
-      ))}
-    </dl>
-  );
+  return <FactList rows={rows} className={styles.facts} />;
 }
 
 function downServices(report: HealthReport): string[] {
