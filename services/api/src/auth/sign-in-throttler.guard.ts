@@ -8,7 +8,7 @@ import { ThrottlerException, ThrottlerGuard } from '@nestjs/throttler';
  */
 @Injectable()
 export class SignInThrottlerGuard extends ThrottlerGuard {
-  protected override getTracker(req: Record<string, any>): Promise<string> {
+  protected override getTracker(req: Record<string, unknown>): Promise<string> {
     const body = (req.body ?? {}) as { email?: unknown };
     const email = typeof body.email === 'string' ? body.email.trim().toLowerCase() : '';
     return Promise.resolve(`${String(req.ip)}|${email}`);

@@ -4,7 +4,7 @@ import { checkPassword } from '@tallyloom/core';
 
 /** Published list of common passwords (zxcvbn-ts, ~49,000 entries), loaded once. */
 const COMMON_PASSWORDS: ReadonlySet<string> = new Set(
-  (dictionary.passwords as string[]).map((password) => password.toLowerCase()),
+  dictionary.passwords.map((password) => password.toLowerCase()),
 );
 
 @Injectable()

@@ -12,7 +12,8 @@ export interface RequestContext {
 export function contextOf(request: Request & { user?: Actor; id?: unknown }): RequestContext {
   return {
     actor: request.user ?? null,
-    requestId: request.id ? String(request.id) : null,
+    requestId:
+      typeof request.id === 'string' || typeof request.id === 'number' ? String(request.id) : null,
     ip: request.ip ?? null,
   };
 }
