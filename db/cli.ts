@@ -30,9 +30,9 @@ async function main(command: string | undefined): Promise<void> {
       case 'seed': {
         const outcome = await seedDemo(sequelize);
         log(
-          outcome.seeded
-            ? `demo network loaded: ${outcome.regions} regions, ${outcome.chapters} chapters, ${outcome.people} people`
-            : 'database already has data: demo seed skipped',
+          outcome.parts.length
+            ? `demo data loaded: ${outcome.parts.join('; ')}`
+            : 'database already has its data: demo seed skipped',
         );
         break;
       }

@@ -6,10 +6,51 @@ import { seedNetworkSetup } from './seed-network-setup';
 import { seedReceipts } from './seed-receipts';
 
 export interface SeedOutcome {
-  seeded: boolean;
-  regions: number;
-  chapters: number;
-  people: number;
+  /** What was loaded this time, e.g. ["network and people", "parcel receipts"]; empty when nothing. */
+  parts: string[];
+}
+
+async function isEmpty(sequelize: Sequelize, table: string): Promise<boolean> {
+  const [{ count }] = await sequelize.query<{ count: number }>(
+    `SELECT COUNT(*) AS count FROM \`${table}\``,
+    {
+      type: QueryTypes.SELECT,
+    },
+  );
+  return Number(count) === 0;
+}
+
+/** True when the regions in the database are the demo network's, so demo parts may be added to it. */
+async function holdsDemoNetwork(sequelize: Sequelize): Promise<boolean> {
+  const rows = await sequelize.query<{ code: string }>('SELECT code FROM regions', {
+    type: QueryTypes.SELECT,
+  });
+  const codes = new Set(rows.map((row) => row.code));
+  return DEMO_REGIONS.every((region) => codes.has(region.code));
+}
+
+/**
+ * Loads the demo scenario part by part, each only while its own tables are empty: a new database
+ * gets everything, and a demo database made by an older version gets the parts added since.
+ * A database holding a real network is never touched.
+ */
+export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
+  const parts: string[] = [];
+  if (await isEmpty(sequelize, 'regions')) {
+    await seedNetworkAndPeople(sequelize);
+    parts.push('network and people');
+  }
+  if (!(await holdsDemoNetwork(sequelize))) return { parts };
+  if (await isEmpty(sequelize, 'blanket_sizes')) {
+    await sequelize.transaction((transaction) => seedNetworkSetup(sequelize, transaction));
+    parts.push('agencies, campaigns, blanket sizes and settings');
+  }
+  if (await isEmpty(sequelize, 'parcel_receipts')) {
+    // In its own transactions: two years of parcels is a lot of rows.
+    await seedReceipts(sequelize);
+    parts.push('parcel receipts');
+  }
+  return { parts };
 }
 
 async function idOf(
@@ -27,18 +68,8 @@ async function idOf(
   return row.id;
 }
 
-/** Loads the demo network into an empty database; leaves a database that has data alone. */
-export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
-  const [{ count }] = await sequelize.query<{ count: number }>(
-    'SELECT COUNT(*) AS count FROM regions',
-    {
-      type: QueryTypes.SELECT,
-    },
-  );
-  if (Number(count) > 0) return { seeded: false, regions: 0, chapters: 0, people: 0 };
-
+async function seedNetworkAndPeople(sequelize: Sequelize): Promise<void> {
   const hashes = await Promise.all(DEMO_SIGN_INS.map((person) => hashPassword(person.password)));
-  let chapters = 0;
   await sequelize.transaction(async (transaction) => {
     const qi = sequelize.getQueryInterface();
     for (const region of DEMO_REGIONS) {
@@ -60,7 +91,6 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
         })),
         { transaction },
       );
-      chapters += region.chapters.length;
     }
 
     const now = new Date();
@@ -93,9 +123,5 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
       });
     }
     await qi.bulkInsert('users', people, { transaction });
-    await seedNetworkSetup(sequelize, transaction);
   });
-  // Receipts come in their own transactions: two years of parcels is a lot of rows.
-  await seedReceipts(sequelize);
-  return { seeded: true, regions: DEMO_REGIONS.length, chapters, people: DEMO_SIGN_INS.length };
 }

@@ -7,9 +7,15 @@ import {
   ROUTE_POLICY,
   SIGNED_IN,
 } from '../../services/api/src/common/access/access.decorators';
+import { receiptImportRouteParams } from './fixtures/receipt-imports';
+import { receiptRouteParams } from './fixtures/receipts';
 import { aRegion } from './support/network-builders';
 import { aUser, signedIn } from './support/people-builders';
+import { networkSetupRouteParams } from './support/setup-builders';
 import { startTestApp, type TestApp } from './support/test-app';
+
+// Signing in six roles and building every route's fixtures outgrows jest's 5 s default under load.
+jest.setTimeout(30_000);
 
 interface RouteEntry {
   method: string;
@@ -32,9 +38,8 @@ function routeTable(testApp: TestApp): RouteEntry[] {
         const method = Reflect.getMetadata(METHOD_METADATA, handler) as RequestMethod | undefined;
         if (method === undefined) continue;
         const sub = String(Reflect.getMetadata(PATH_METADATA, handler) ?? '');
-        const isPublic =
-          Reflect.getMetadata(PUBLIC_ROUTE, handler) ??
-          Reflect.getMetadata(PUBLIC_ROUTE, controller);
+        const isPublic = (Reflect.getMetadata(PUBLIC_ROUTE, handler) ??
+          Reflect.getMetadata(PUBLIC_ROUTE, controller)) as boolean | undefined;
         const policy = (Reflect.getMetadata(ROUTE_POLICY, handler) ??
           Reflect.getMetadata(ROUTE_POLICY, controller)) as RouteEntry['policy'];
         const path = `/api/${[base, sub].filter((p) => p && p !== '/').join('/')}`.replace(
@@ -99,6 +104,24 @@ describe('every route × every role × in and out of scope', () => {
         outOfScope: String(invitedAway.user.id),
       },
       '/api/auth/links/:token': { inScope: 'not-a-real-token', outOfScope: 'not-a-real-token' },
+      ...(await receiptRouteParams(
+        testApp,
+        tokens.get('network_admin')!,
+        home.chapters[0].id,
+        away.chapters[0].id,
+      )),
+      ...(await receiptImportRouteParams(
+        testApp,
+        tokens.get('network_admin')!,
+        home.chapters[0].id,
+        away.chapters[0].id,
+      )),
+      ...(await networkSetupRouteParams(testApp.app, {
+        homeRegionId: home.region.id,
+        homeChapterId: home.chapters[0].id,
+        awayRegionId: away.region.id,
+        awayChapterId: away.chapters[0].id,
+      })),
     };
   });
   afterAll(() => testApp.close());

@@ -15,3 +15,5 @@ export * from './panels/blanket-size';
 export * from './panels/panel-check';
 export * from './contract/network-setup';
 export * from './contract/receipts';
+export * from './panels/size-chart';
+export * from './contract/receipt-import';

@@ -13,6 +13,11 @@ import { MailModule } from './mail/mail.module';
 import { UsersModule } from './users/users.module';
 import { JobsModule } from './jobs/jobs.module';
 import { RegionsModule } from './regions/regions.module';
+import { AgenciesModule } from './agencies/agencies.module';
+import { CampaignsModule } from './campaigns/campaigns.module';
+import { BlanketSizesModule } from './blanket-sizes/blanket-sizes.module';
+import { SettingsModule } from './settings/settings.module';
+import { ReceiptsModule } from './receipts/receipts.module';
 
 /** The whole application; built by a function so each instance validates the environment anew. */
 @Module({})
@@ -52,6 +57,11 @@ export class AppModule {
         HealthModule,
         RegionsModule,
         ChaptersModule,
+        AgenciesModule,
+        CampaignsModule,
+        BlanketSizesModule,
+        SettingsModule,
+        ReceiptsModule,
       ],
     };
   }

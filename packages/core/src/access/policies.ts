@@ -11,7 +11,13 @@ export const POLICIES = {
   /** Set up regions, chapters, partner agencies, campaigns, blanket sizes and settings. */
   'network.manage': ['network_admin'],
   /** Read parcel receipts and their scans (in scope); grant writers see aggregates only. */
-  'receipts.read': ['network_admin', 'national_staff', 'regional_coordinator', 'chapter_lead', 'auditor'],
+  'receipts.read': [
+    'network_admin',
+    'national_staff',
+    'regional_coordinator',
+    'chapter_lead',
+    'auditor',
+  ],
   /** Log, correct and import parcel receipts (chapter leads for their own chapter). */
   'receipts.write': ['network_admin', 'national_staff', 'chapter_lead'],
   /**

@@ -1,11 +1,12 @@
-import { Controller, Get, Query } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiTags } from '@nestjs/swagger';
+import { Body, Controller, Get, Patch, Post, Query } from '@nestjs/common';
+import { ApiBearerAuth, ApiCreatedResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { Allow } from '../common/access/access.decorators';
 import { Ctx, type SignedInContext } from '../common/context/request-context';
 import { IdParam } from '../common/pipes/id-param';
 import { ChaptersService } from './chapters.service';
 import { ChapterDto } from './dto/chapter.dto';
 import { ListChaptersQuery } from './dto/list-chapters.query';
+import { SaveChapterDto, UpdateChapterDto } from './dto/save-chapter.dto';
 
 @ApiTags('network')
 @ApiBearerAuth()
@@ -24,5 +25,23 @@ export class ChaptersController {
   @ApiOkResponse({ type: ChapterDto })
   get(@IdParam() id: number, @Ctx() context: SignedInContext): Promise<ChapterDto> {
     return this.chapters.get(context.actor, id);
+  }
+
+  @Post()
+  @Allow('network.manage')
+  @ApiCreatedResponse({ type: ChapterDto, description: 'Created; the name is unique (409)' })
+  create(@Body() body: SaveChapterDto, @Ctx() context: SignedInContext): Promise<ChapterDto> {
+    return this.chapters.create(context, body);
+  }
+
+  @Patch(':id')
+  @Allow('network.manage')
+  @ApiOkResponse({ type: ChapterDto, description: 'Changes only the fields sent' })
+  update(
+    @IdParam() id: number,
+    @Body() body: UpdateChapterDto,
+    @Ctx() context: SignedInContext,
+  ): Promise<ChapterDto> {
+    return this.chapters.update(context, id, body);
   }
 }

@@ -1,6 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { resolve } from 'node:path';
+import { DEFAULT_UPLOADS_DIR } from '../storage/storage-layout';
 
 /** Typed access to the validated environment; the one place that knows the variable names. */
 @Injectable()
@@ -88,5 +89,14 @@ export class AppConfig {
 
   get mailFrom(): string {
     return this.config.getOrThrow('MAIL_FROM');
+  }
+
+  /** Where uploaded scans are stored. */
+  get uploadsDir(): string {
+    return resolve(this.config.get<string>('UPLOADS_DIR') ?? DEFAULT_UPLOADS_DIR);
+  }
+
+  get uploadMaxBytes(): number {
+    return Number(this.config.getOrThrow('UPLOAD_MAX_BYTES'));
   }
 }

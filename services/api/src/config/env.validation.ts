@@ -46,4 +46,12 @@ export const envValidationSchema = Joi.object({
     .uri({ scheme: ['smtp', 'smtps'] })
     .optional(),
   MAIL_FROM: Joi.string().default('Tallyloom <no-reply@tallyloom.example>'),
+  // Uploaded scans; defaults to <repo>/.data/uploads.
+  UPLOADS_DIR: Joi.string().optional(),
+  // Largest accepted upload, in bytes (10 MiB by default).
+  UPLOAD_MAX_BYTES: Joi.number()
+    .integer()
+    .min(1)
+    .max(100 * 1024 * 1024)
+    .default(10 * 1024 * 1024),
 });

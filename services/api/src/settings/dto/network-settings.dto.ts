@@ -1,0 +1,33 @@
+import { ApiProperty } from '@nestjs/swagger';
+import type { NetworkSettings } from '@tallyloom/core';
+import { IsNumber, Max, Min } from 'class-validator';
+import { WholeNumberField } from '../../common/validation/fields';
+
+const TOLERANCE =
+  'panelToleranceIn must be a number of inches from 0 to 3, with at most 2 decimals';
+
+/** The network's settings, read and written whole. */
+export class NetworkSettingsDto implements NetworkSettings {
+  @WholeNumberField(1, 12, {
+    example: 7,
+    description: 'Month the fiscal year starts: 1 = January … 12 = December',
+  })
+  fiscalYearStartMonth: number;
+
+  @ApiProperty({
+    example: 0.5,
+    minimum: 0,
+    maximum: 3,
+    description: 'Allowed difference of a measured panel from 7 × 9 in, in inches',
+  })
+  @Max(3, { message: TOLERANCE })
+  @Min(0, { message: TOLERANCE })
+  @IsNumber({ allowNaN: false, allowInfinity: false, maxDecimalPlaces: 2 }, { message: TOLERANCE })
+  panelToleranceIn: number;
+
+  @WholeNumberField(1, 1_000_000, {
+    example: 10000,
+    description: 'A count above this on one receipt is refused as implausible',
+  })
+  receiptCountCeiling: number;
+}

@@ -1,0 +1,57 @@
+import { Injectable } from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import type { NetworkSettings } from '@tallyloom/core';
+import type { Sequelize } from 'sequelize-typescript';
+import { AuditService } from '../audit/audit.service';
+import type { SignedInContext } from '../common/context/request-context';
+import type { NetworkSettingsDto } from './dto/network-settings.dto';
+import { Setting } from './models/setting.model';
+import { SETTING_KEYS, settingsFromRows } from './settings.mappers';
+
+@Injectable()
+export class SettingsService {
+  constructor(
+    @InjectConnection() private readonly sequelize: Sequelize,
+    @InjectModel(Setting) private readonly settings: typeof Setting,
+    private readonly audit: AuditService,
+  ) {}
+
+  /** The settings in force: stored values over the defaults. Other features read them here. */
+  async current(): Promise<NetworkSettings> {
+    return settingsFromRows(await this.settings.findAll({ where: { key: SETTING_KEYS } }));
+  }
+
+  /** Replaces every setting; one audit entry holds the whole before and after. */
+  async replace(context: SignedInContext, body: NetworkSettingsDto): Promise<NetworkSettings> {
+    return this.sequelize.transaction(async (transaction) => {
+      const before = settingsFromRows(
+        await this.settings.findAll({ where: { key: SETTING_KEYS }, transaction, lock: true }),
+      );
+      const after: NetworkSettings = {
+        fiscalYearStartMonth: body.fiscalYearStartMonth,
+        panelToleranceIn: body.panelToleranceIn,
+        receiptCountCeiling: body.receiptCountCeiling,
+      };
+      const changed = SETTING_KEYS.filter((key) => before[key] !== after[key]);
+      if (changed.length === 0) return after;
+      for (const key of changed) {
+        await this.settings.upsert(
+          { key, value: after[key], updatedBy: context.actor.id, updatedAt: new Date() },
+          { transaction },
+        );
+      }
+      await this.audit.record(
+        context,
+        {
+          action: 'setting.updated',
+          entityType: 'setting',
+          entityId: changed.join(','),
+          before: { ...before },
+          after: { ...after },
+        },
+        transaction,
+      );
+      return after;
+    });
+  }
+}
