@@ -12,7 +12,9 @@ const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packag
 /** Navigation entries and the policy each one needs; a role must see exactly the ones it may use. */
 const NAVIGATION: Array<{ label: string; policy: Policy | null }> = [
   { label: 'Network', policy: 'network.read' },
+  { label: 'Parcels', policy: 'receipts.read' },
   { label: 'System status', policy: 'system.read' },
+  { label: 'Network set-up', policy: 'network.manage' },
   { label: 'People', policy: 'people.manage' },
   { label: 'Dev outbox', policy: 'outbox.read' },
 ];

@@ -41,8 +41,11 @@ export async function openWatchedPage(browser: Browser, baseUrl: string): Promis
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
   page.on('request', (req) => {
-    if (!req.url().startsWith(baseUrl) && !req.url().startsWith('data:'))
-      problems.push(`off-site request: ${req.url()}`);
+    // data: and blob: URLs never leave the page (scan previews are blobs fetched with the token).
+    const local = [baseUrl, 'data:', `blob:${baseUrl}`].some((prefix) =>
+      req.url().startsWith(prefix),
+    );
+    if (!local) problems.push(`off-site request: ${req.url()}`);
   });
   page.on('requestfailed', (req) => problems.push(`request failed: ${req.url()}`));
   return { context, page, problems };

@@ -20,6 +20,12 @@ export const routeAccess = {
   status: { name: 'System status', policy: 'system.read' },
   people: { name: 'People', policy: 'people.manage' },
   outbox: { name: 'Dev outbox', policy: 'outbox.read' },
+  receipts: { name: 'Parcels', policy: 'receipts.read' },
+  receipt: { name: 'Parcel', policy: 'receipts.read' },
+  receiptNew: { name: 'Log a parcel', policy: 'receipts.write' },
+  receiptImport: { name: 'Import parcels', policy: 'receipts.write' },
+  receiptEdit: { name: 'Correct a parcel', policy: 'receipts.write' },
+  setup: { name: 'Network set-up', policy: 'network.manage' },
   account: { name: 'My account', policy: null },
 } as const satisfies Record<string, RouteAccess>;
 

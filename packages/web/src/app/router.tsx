@@ -86,11 +86,104 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               handle: { access: routeAccess.people } satisfies AccessHandle,
             },
             {
+              path: paths.setup.path,
+              // Only admins set up the network: the layout and each part load when first opened.
+              lazy: async () => ({ Component: (await import('./routes/setup')).SetupRoute }),
+              loader: requireAccess(routeAccess.setup),
+              errorElement: pageError,
+              handle: { access: routeAccess.setup } satisfies AccessHandle,
+              children: [
+                {
+                  index: true,
+                  lazy: async () => ({
+                    Component: (await import('./routes/setup-regions')).SetupRegionsRoute,
+                  }),
+                  errorElement: pageError,
+                },
+                {
+                  path: paths.setupAgencies.path,
+                  lazy: async () => ({
+                    Component: (await import('./routes/setup-agencies')).SetupAgenciesRoute,
+                  }),
+                  errorElement: pageError,
+                },
+                {
+                  path: paths.setupCampaigns.path,
+                  lazy: async () => ({
+                    Component: (await import('./routes/setup-campaigns')).SetupCampaignsRoute,
+                  }),
+                  errorElement: pageError,
+                },
+                {
+                  path: paths.setupBlanketSizes.path,
+                  lazy: async () => ({
+                    Component: (await import('./routes/setup-blanket-sizes'))
+                      .SetupBlanketSizesRoute,
+                  }),
+                  errorElement: pageError,
+                },
+                {
+                  path: paths.setupSettings.path,
+                  lazy: async () => ({
+                    Component: (await import('./routes/setup-settings')).SetupSettingsRoute,
+                  }),
+                  errorElement: pageError,
+                },
+              ],
+            },
+            {
               path: paths.outbox.path,
               lazy: async () => ({ Component: (await import('./routes/outbox')).OutboxRoute }),
               loader: requireAccess(routeAccess.outbox),
               errorElement: pageError,
               handle: { access: routeAccess.outbox } satisfies AccessHandle,
+            },
+            {
+              path: paths.receipts.path,
+              // The parcel pages load when first opened: the form and detail are the heavy ones.
+              lazy: async () => ({ Component: (await import('./routes/receipts')).ReceiptsRoute }),
+              loader: requireAccess(routeAccess.receipts),
+              // Filters, page and order change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.receipts } satisfies AccessHandle,
+            },
+            {
+              path: paths.receiptNew.path,
+              lazy: async () => ({
+                Component: (await import('./routes/receipts-new')).ReceiptNewRoute,
+              }),
+              loader: requireAccess(routeAccess.receiptNew),
+              errorElement: pageError,
+              handle: { access: routeAccess.receiptNew } satisfies AccessHandle,
+            },
+            {
+              path: paths.receiptImport.path,
+              lazy: async () => ({
+                Component: (await import('./routes/receipts-import')).ReceiptImportRoute,
+              }),
+              loader: requireAccess(routeAccess.receiptImport),
+              errorElement: pageError,
+              handle: { access: routeAccess.receiptImport } satisfies AccessHandle,
+            },
+            {
+              path: paths.receipt.path,
+              lazy: async () => ({
+                Component: (await import('./routes/receipts-detail')).ReceiptDetailRoute,
+              }),
+              loader: requireAccess(routeAccess.receipt),
+              errorElement: pageError,
+              handle: { access: routeAccess.receipt } satisfies AccessHandle,
+            },
+            {
+              path: paths.receiptEdit.path,
+              lazy: async () => ({
+                Component: (await import('./routes/receipts-edit')).ReceiptEditRoute,
+              }),
+              loader: requireAccess(routeAccess.receiptEdit),
+              errorElement: pageError,
+              handle: { access: routeAccess.receiptEdit } satisfies AccessHandle,
             },
             {
               path: paths.account.path,

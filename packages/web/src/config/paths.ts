@@ -27,6 +27,47 @@ export const paths = {
     path: '/outbox',
     getHref: () => '/outbox',
   },
+  receipts: {
+    path: '/receipts',
+    /** `search`: the list's filters, page and order, as the list keeps them in its URL. */
+    getHref: (search = '') => `/receipts${search}`,
+  },
+  receiptNew: {
+    path: '/receipts/new',
+    getHref: () => '/receipts/new',
+  },
+  receiptImport: {
+    path: '/receipts/import',
+    getHref: () => '/receipts/import',
+  },
+  receipt: {
+    path: '/receipts/:id',
+    getHref: (id: number) => `/receipts/${id}`,
+  },
+  receiptEdit: {
+    path: '/receipts/:id/edit',
+    getHref: (id: number) => `/receipts/${id}/edit`,
+  },
+  setup: {
+    path: '/setup',
+    getHref: () => '/setup',
+  },
+  setupAgencies: {
+    path: '/setup/agencies',
+    getHref: () => '/setup/agencies',
+  },
+  setupCampaigns: {
+    path: '/setup/campaigns',
+    getHref: () => '/setup/campaigns',
+  },
+  setupBlanketSizes: {
+    path: '/setup/blanket-sizes',
+    getHref: () => '/setup/blanket-sizes',
+  },
+  setupSettings: {
+    path: '/setup/settings',
+    getHref: () => '/setup/settings',
+  },
   account: {
     path: '/account',
     getHref: () => '/account',

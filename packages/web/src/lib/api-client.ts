@@ -117,13 +117,20 @@ async function send(
   accessToken?: string,
 ): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  // A multipart form (a file upload) sets its own Content-Type, with the boundary.
+  const multipart = options.body instanceof FormData;
+  if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
   if (accessToken) headers.Authorization = `Bearer ${accessToken}`;
   try {
     return await fetch(buildUrl(path, options.params), {
       method,
       headers,
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body:
+        options.body === undefined
+          ? undefined
+          : multipart
+            ? (options.body as FormData)
+            : JSON.stringify(options.body),
       // The refresh cookie rides along only to the API's own origin.
       credentials: 'same-origin',
       signal: options.signal,
@@ -223,14 +230,32 @@ export async function apiRequest<T>(
   options: RequestWithBodyOptions = {},
 ): Promise<T> {
   if (options.anonymous) return readAnswer<T>(await send(method, path, options), path, options);
+  return readAnswer<T>(await signedInResponse(method, path, options), path, options);
+}
 
+/** Sends with the bearer token; on a 401 renews it once and sends again. */
+async function signedInResponse(
+  method: HttpMethod,
+  path: string,
+  options: RequestWithBodyOptions,
+): Promise<Response> {
   const token = await accessTokenFor(path);
   let response = await send(method, path, options, token);
   if (response.status === 401) {
     const renewed = await renewedAccessToken(token);
     if (renewed) response = await send(method, path, options, renewed);
   }
-  return readAnswer<T>(response, path, options);
+  return response;
+}
+
+/**
+ * GET a file (e.g. a scan) as a Blob. It needs the bearer token, so an `<img src>` cannot load
+ * it directly: the screen turns the Blob into an object URL.
+ */
+export async function apiGetBlob(path: string, options: RequestOptions = {}): Promise<Blob> {
+  const response = await signedInResponse('GET', path, options);
+  if (!response.ok) throw new ApiError(errorBodyFrom(response, await readJson(response)));
+  return response.blob();
 }
 
 /** GET a JSON resource from the API. */
@@ -244,4 +269,13 @@ export function apiPost<T>(path: string, body?: unknown, options: RequestOptions
 
 export function apiPatch<T>(path: string, body: unknown, options: RequestOptions = {}): Promise<T> {
   return apiRequest<T>('PATCH', path, { ...options, body });
+}
+
+/** Replaces a resource whole, e.g. the network's settings. */
+export function apiPut<T>(path: string, body: unknown, options: RequestOptions = {}): Promise<T> {
+  return apiRequest<T>('PUT', path, { ...options, body });
+}
+
+export function apiDelete<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  return apiRequest<T>('DELETE', path, options);
 }

@@ -14,6 +14,24 @@ export function formatMonthYear(isoDate: string): string {
   return isValid(date) ? format(date, 'MMM yyyy') : isoDate;
 }
 
+/** "2026-01-04" → "4 Jan 2026". Parsed as a local date so the day never slips across time zones. */
+export function formatDate(isoDate: string): string {
+  const date = parseISO(isoDate);
+  return isValid(date) ? format(date, 'd MMM yyyy') : isoDate;
+}
+
+/** Today as YYYY-MM-DD in the reader's time zone, for date fields' `max`. */
+export function todayIsoDate(now = new Date()): string {
+  return format(now, 'yyyy-MM-dd');
+}
+
+/** 2_400_000 → "2.3 MB": a file's size in the unit a person reads at a glance. */
+export function formatFileSize(bytes: number): string {
+  if (bytes >= 1024 * 1024) return `${Number((bytes / (1024 * 1024)).toFixed(1))} MB`;
+  if (bytes >= 1024) return `${Math.round(bytes / 1024)} KB`;
+  return `${bytes} bytes`;
+}
+
 /** 10 → "Day 10 of the following month". */
 export function formatReportDueDay(dueDay: number): string {
   return `Day ${dueDay} of the following month`;

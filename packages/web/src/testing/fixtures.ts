@@ -1,8 +1,10 @@
 import type {
   ApiErrorBody,
+  CampaignView,
   ChapterView,
   HealthReport,
   Page,
+  PartnerAgencyView,
   RegionView,
   Role,
   SessionResponse,
@@ -166,3 +168,54 @@ export function apiErrorBody(
   };
   return { statusCode, error: error[statusCode] ?? 'Error', message, ...extra };
 }
+
+// Partner agencies and campaigns of the demo network (BRIEF §7), for the set-up and network pages.
+export const demoAgencies: PartnerAgencyView[] = [
+  {
+    id: 31,
+    name: 'Maple Street Family Shelter',
+    kind: 'family_shelter',
+    active: true,
+    chapters: [{ id: 11, name: 'Alder Falls' }],
+  },
+  {
+    id: 32,
+    name: 'Riverside Care Home',
+    kind: 'care_home',
+    active: true,
+    chapters: [
+      { id: 21, name: 'Brindle Bay' },
+      { id: 22, name: 'Cedar Hollow' },
+    ],
+  },
+  {
+    id: 33,
+    name: 'Brindle Bay Community Pantry',
+    kind: 'other',
+    active: false,
+    chapters: [{ id: 21, name: 'Brindle Bay' }],
+  },
+];
+
+export const demoCampaigns: CampaignView[] = [
+  {
+    id: 41,
+    code: 'DWD26',
+    name: 'Deep Winter Drive',
+    goalPanels: 4000,
+    startsOn: '2025-11-01',
+    endsOn: '2026-02-28',
+    regionId: null,
+    regionName: null,
+  },
+  {
+    id: 42,
+    code: 'RL-SPRING25',
+    name: 'Riverlands Spring Stitch-In',
+    goalPanels: 1200,
+    startsOn: '2025-03-01',
+    endsOn: '2025-05-31',
+    regionId: 2,
+    regionName: 'Riverlands',
+  },
+];

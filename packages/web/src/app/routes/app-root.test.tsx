@@ -1,5 +1,5 @@
 import type { SessionUser } from '@tallyloom/core';
-import { screen, within } from '@testing-library/react';
+import { cleanup, screen, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
 import { demoChapters, demoPeople, demoRegions } from '@/testing/fixtures';
@@ -65,25 +65,45 @@ describe('the app shell', () => {
 });
 
 describe('navigation by role', () => {
-  it('gives a network admin every page, People and the dev outbox included', async () => {
+  it('gives a network admin every page, People, Network set-up and the dev outbox included', async () => {
     expect(await navigationLinks(demoPeople.admin)).toEqual([
       'Network',
+      'Parcels',
       'System status',
       'People',
+      'Network set-up',
       'Dev outbox',
     ]);
   });
 
-  it('gives national staff the network and system status, but not People', async () => {
-    expect(await navigationLinks(demoPeople.staff)).toEqual(['Network', 'System status']);
+  it('gives national staff the network, parcels and system status, but not People or set-up', async () => {
+    expect(await navigationLinks(demoPeople.staff)).toEqual([
+      'Network',
+      'Parcels',
+      'System status',
+    ]);
   });
 
-  it('gives a chapter lead neither People nor the dev outbox', async () => {
-    expect(await navigationLinks(demoPeople.chapterLead)).toEqual(['Network']);
+  it('gives a chapter lead neither People, Network set-up nor the dev outbox', async () => {
+    expect(await navigationLinks(demoPeople.chapterLead)).toEqual(['Network', 'Parcels']);
   });
 
-  it('does not show System status to a grant writer', async () => {
+  it('gives a regional coordinator the parcels of their region to read', async () => {
+    expect(await navigationLinks(demoPeople.coordinator)).toEqual(['Network', 'Parcels']);
+  });
+
+  it('does not show System status, parcels or Network set-up to a grant writer', async () => {
     expect(await navigationLinks(demoPeople.grantWriter)).toEqual(['Network']);
+  });
+
+  it('shows Network set-up to network admins only', async () => {
+    for (const person of Object.values(demoPeople)) {
+      const links = await navigationLinks(person);
+      expect(`${person.role}: ${links.includes('Network set-up')}`).toBe(
+        `${person.role}: ${person.role === 'network_admin'}`,
+      );
+      cleanup();
+    }
   });
 });
 

@@ -1,8 +1,10 @@
 import {
+  BoxMultiple20Regular,
   Home20Regular,
   MailInbox20Regular,
   People20Regular,
   Pulse20Regular,
+  WrenchSettings20Regular,
 } from '@fluentui/react-icons';
 import { can, ROLE_LABELS, rolesFor, type SessionUser } from '@tallyloom/core';
 import type { ReactNode } from 'react';
@@ -26,6 +28,12 @@ const navItems: Array<AppNavItem & { access: RouteAccess }> = [
     access: routeAccess.network,
   },
   {
+    label: routeAccess.receipts.name,
+    to: paths.receipts.getHref(),
+    icon: BoxMultiple20Regular,
+    access: routeAccess.receipts,
+  },
+  {
     label: routeAccess.status.name,
     to: paths.status.getHref(),
     icon: Pulse20Regular,
@@ -36,6 +44,12 @@ const navItems: Array<AppNavItem & { access: RouteAccess }> = [
     to: paths.people.getHref(),
     icon: People20Regular,
     access: routeAccess.people,
+  },
+  {
+    label: routeAccess.setup.name,
+    to: paths.setup.getHref(),
+    icon: WrenchSettings20Regular,
+    access: routeAccess.setup,
   },
   {
     label: routeAccess.outbox.name,

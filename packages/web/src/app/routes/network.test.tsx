@@ -1,9 +1,24 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
-import { demoChapters, demoPeople, demoRegions } from '@/testing/fixtures';
+import {
+  demoAgencies,
+  demoCampaigns,
+  demoChapters,
+  demoPeople,
+  demoRegions,
+} from '@/testing/fixtures';
 import { jsonResponse, mockApi, requestedUrls } from '@/testing/mock-api';
 import { renderApp } from '@/testing/render-app';
+
+/** The page also lists partner agencies and campaigns; tests about regions leave those be. */
+function mockNetworkApi(handlers: Parameters<typeof mockApi>[0]) {
+  return mockApi({
+    '/api/agencies': () => jsonResponse(demoAgencies),
+    '/api/campaigns': () => jsonResponse(demoCampaigns),
+    ...handlers,
+  });
+}
 
 function chaptersFor(url: URL) {
   const regionId = url.searchParams.get('regionId');
@@ -12,7 +27,7 @@ function chaptersFor(url: URL) {
 
 describe('Network page', () => {
   it('lists the regions with their codes and chapter counts', async () => {
-    mockApi({
+    mockNetworkApi({
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
     });
@@ -31,7 +46,7 @@ describe('Network page', () => {
   });
 
   it('shows every chapter with its reporting deadline and start month', async () => {
-    mockApi({
+    mockNetworkApi({
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
     });
@@ -48,7 +63,7 @@ describe('Network page', () => {
   });
 
   it("narrows the chapters to one region and asks the server for that region's list", async () => {
-    const fetchMock = mockApi({
+    const fetchMock = mockNetworkApi({
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
     });
@@ -67,9 +82,11 @@ describe('Network page', () => {
   });
 
   it('says what to do first when the network has no regions', async () => {
-    mockApi({
+    mockNetworkApi({
       '/api/regions': () => jsonResponse([]),
       '/api/chapters': () => jsonResponse([]),
+      '/api/agencies': () => jsonResponse([]),
+      '/api/campaigns': () => jsonResponse([]),
     });
     renderApp(paths.network.getHref(), { as: demoPeople.admin });
 
@@ -80,7 +97,7 @@ describe('Network page', () => {
   });
 
   it('shows a spinner while the regions load', async () => {
-    mockApi({
+    mockNetworkApi({
       '/api/regions': () => new Promise<Response>(() => {}),
       '/api/chapters': () => new Promise<Response>(() => {}),
     });
@@ -91,7 +108,7 @@ describe('Network page', () => {
 
   it('shows what went wrong with the request id, and recovers on retry', async () => {
     let regionsFail = true;
-    mockApi({
+    mockNetworkApi({
       '/api/regions': () =>
         regionsFail
           ? jsonResponse(
@@ -119,5 +136,45 @@ describe('Network page', () => {
 
     expect(await screen.findByRole('table', { name: 'Regions' })).toBeInTheDocument();
     expect(screen.queryByRole('alert')).not.toBeInTheDocument();
+  });
+
+  it('lists partner agencies and campaigns read-only, with no set-up actions', async () => {
+    mockNetworkApi({
+      '/api/regions': () => jsonResponse(demoRegions),
+      '/api/chapters': (url) => jsonResponse(chaptersFor(url)),
+    });
+    renderApp(paths.network.getHref(), { as: demoPeople.staff });
+
+    const agencies = await screen.findByRole('table', { name: 'Partner agencies' });
+    expect(within(agencies).getByRole('row', { name: /Riverside Care Home/ })).toHaveTextContent(
+      'Care homeBrindle Bay, Cedar HollowActive',
+    );
+    expect(
+      within(agencies).getByRole('row', { name: /Brindle Bay Community Pantry/ }),
+    ).toHaveTextContent('Inactive');
+    const campaigns = await screen.findByRole('table', { name: 'Campaigns' });
+    expect(within(campaigns).getByRole('row', { name: /DWD26/ })).toHaveTextContent(
+      'Deep Winter Drive4,0001 Nov 2025 – 28 Feb 2026Whole network',
+    );
+    expect(screen.queryByRole('button', { name: /Actions for/ })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Add agency' })).not.toBeInTheDocument();
+  });
+
+  it("lists a chapter lead's agencies under their chapter's name, as a short list", async () => {
+    mockNetworkApi({
+      '/api/regions': () => jsonResponse(demoRegions.filter((region) => region.id === 1)),
+      '/api/chapters': () => jsonResponse(demoChapters.filter((chapter) => chapter.id === 11)),
+      '/api/agencies': () => jsonResponse(demoAgencies.slice(0, 1)),
+    });
+    renderApp(paths.network.getHref(), { as: demoPeople.chapterLead });
+
+    const agencies = await screen.findByRole('list', {
+      name: 'Partner agencies Alder Falls serves',
+    });
+    expect(within(agencies).getByRole('listitem')).toHaveTextContent(
+      'Maple Street Family ShelterFamily shelter',
+    );
+    // The chapter's own name sits in one cell only: the chapters table's.
+    expect(screen.getAllByRole('cell', { name: /Alder Falls/ })).toHaveLength(1);
   });
 });

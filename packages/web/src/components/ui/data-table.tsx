@@ -36,6 +36,11 @@ const useStyles = makeStyles({
   headerCell: { fontWeight: tokens.fontWeightSemibold, whiteSpace: 'nowrap' },
   numericHeaderButton: { justifyContent: 'flex-end' },
   numericCell: { textAlign: 'end' },
+  footerRow: {
+    backgroundColor: tokens.colorNeutralBackground2,
+    fontWeight: tokens.fontWeightSemibold,
+    borderTop: `2px solid ${tokens.colorNeutralStroke1}`,
+  },
 });
 
 export interface DataTableProps<TRow> {
@@ -51,6 +56,14 @@ export interface DataTableProps<TRow> {
   enableSorting?: boolean;
   /** Server-side pages: `data` is the current page, `rowCount` the total on the server. */
   pagination?: ServerPagination;
+  /** Server-side order: the server sorts every row, the table only shows and changes the order. */
+  sorting?: ServerSorting;
+}
+
+export interface ServerSorting {
+  /** One column at a time. */
+  state: SortingState;
+  onChange: (sorting: SortingState) => void;
 }
 
 export interface ServerPagination {
@@ -74,9 +87,11 @@ export function DataTable<TRow>({
   initialSorting = [],
   enableSorting = true,
   pagination,
+  sorting: serverSorting,
 }: DataTableProps<TRow>) {
   const styles = useStyles();
-  const [sorting, setSorting] = useState<SortingState>(initialSorting);
+  const [localSorting, setLocalSorting] = useState<SortingState>(initialSorting);
+  const sorting = serverSorting?.state ?? localSorting;
   const paginationState: PaginationState | undefined = pagination
     ? { pageIndex: pagination.pageIndex, pageSize: pagination.pageSize }
     : undefined;
@@ -85,7 +100,15 @@ export function DataTable<TRow>({
     columns,
     state: { sorting, ...(paginationState ? { pagination: paginationState } : {}) },
     enableSorting,
-    onSortingChange: setSorting,
+    onSortingChange: (updater) => {
+      const next = typeof updater === 'function' ? updater(sorting) : updater;
+      if (serverSorting) serverSorting.onChange(next);
+      else setLocalSorting(next);
+    },
+    manualSorting: !!serverSorting,
+    // The server sorts by one column, and always by something.
+    enableMultiSort: !serverSorting,
+    enableSortingRemoval: !serverSorting,
     manualPagination: !!pagination,
     rowCount: pagination?.rowCount,
     onPaginationChange: (updater) => {
@@ -97,6 +120,9 @@ export function DataTable<TRow>({
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
   });
+
+  // A totals row, when a column defines a footer.
+  const hasFooter = columns.some((column) => column.footer !== undefined);
 
   const tableElement = (
     <Table size="small" aria-labelledby={labelledBy} className={styles.table}>
@@ -140,6 +166,24 @@ export function DataTable<TRow>({
           </TableRow>
         ))}
       </TableBody>
+      {hasFooter ? (
+        <tfoot>
+          {table.getFooterGroups().map((footerGroup) => (
+            <TableRow key={footerGroup.id} className={styles.footerRow}>
+              {footerGroup.headers.map((header) => (
+                <TableCell
+                  key={header.id}
+                  className={header.column.columnDef.meta?.numeric ? styles.numericCell : undefined}
+                >
+                  {header.isPlaceholder
+                    ? null
+                    : flexRender(header.column.columnDef.footer, header.getContext())}
+                </TableCell>
+              ))}
+            </TableRow>
+          ))}
+        </tfoot>
+      ) : null}
     </Table>
   );
 

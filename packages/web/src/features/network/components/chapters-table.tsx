@@ -1,6 +1,9 @@
+import { Edit20Regular } from '@fluentui/react-icons';
 import { createColumnHelper } from '@tanstack/react-table';
 import type { ChapterView } from '@tallyloom/core';
+import { useMemo } from 'react';
 import { DataTable } from '@/components/ui/data-table';
+import { RowActions } from '@/components/ui/row-actions';
 import { formatMonthYear, formatReportDueDay } from '@/lib/format';
 
 const column = createColumnHelper<ChapterView>();
@@ -26,14 +29,42 @@ const columns = [
 export function ChaptersTable({
   chapters,
   labelledBy,
+  onEdit,
 }: {
   chapters: ChapterView[];
   labelledBy: string;
+  /** Adds an Actions column with "Edit…" (network set-up). */
+  onEdit?: (chapter: ChapterView) => void;
 }) {
+  const shown = useMemo(
+    () =>
+      onEdit
+        ? [
+            ...columns,
+            column.display({
+              id: 'actions',
+              header: 'Actions',
+              cell: (info) => (
+                <RowActions
+                  name={info.row.original.name}
+                  actions={[
+                    {
+                      label: 'Edit…',
+                      icon: <Edit20Regular />,
+                      onClick: () => onEdit(info.row.original),
+                    },
+                  ]}
+                />
+              ),
+            }),
+          ]
+        : columns,
+    [onEdit],
+  );
   return (
     <DataTable
       data={chapters}
-      columns={columns}
+      columns={shown}
       labelledBy={labelledBy}
       getRowId={(chapter) => String(chapter.id)}
       initialSorting={[{ id: 'name', desc: false }]}
