@@ -33,5 +33,6 @@ export default defineConfig({
     // Each test stubs fetch for itself; restore the real globals afterwards.
     unstubGlobals: true,
     restoreMocks: true,
+    testTimeout: 20_000,
   },
 });

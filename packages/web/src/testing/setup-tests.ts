@@ -1,7 +1,11 @@
 import '@testing-library/jest-dom/vitest';
-import { cleanup } from '@testing-library/react';
+import { cleanup, configure } from '@testing-library/react';
 import { afterEach } from 'vitest';
 import { resetSessionForTests } from '@/lib/session/session';
+
+// Fluent pages render slowly in jsdom on a busy two-core machine; wait up to 5 s for what a
+// person would see, rather than failing at testing-library's 1 s default.
+configure({ asyncUtilTimeout: 5000 });
 
 // jsdom has no layout, so no scrolling; the router's scroll restoration calls it on every navigation.
 window.scrollTo = () => {};

@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { useNotify } from '@/components/ui/app-toaster';
 import { formProblems, shownProblems } from '@/lib/form-errors';
 import { useUpdateUser } from '../api/update-user';
-import { PersonDialogForm } from './person-dialog-form';
+import { DialogForm } from '@/components/ui/dialog-form';
 import {
   PersonFields,
   personProblems,
@@ -60,7 +60,7 @@ function EditPersonForm({
   };
 
   return (
-    <PersonDialogForm
+    <DialogForm
       title={`Edit ${person.displayName}`}
       intro={`Signs in as ${person.email}.`}
       problems={server.general}
@@ -75,7 +75,7 @@ function EditPersonForm({
         problems={shown}
         scopeOptions={scopeOptions}
       />
-    </PersonDialogForm>
+    </DialogForm>
   );
 }
 

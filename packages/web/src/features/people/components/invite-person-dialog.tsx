@@ -11,7 +11,7 @@ import { useState } from 'react';
 import { useNotify } from '@/components/ui/app-toaster';
 import { formProblems, shownProblems } from '@/lib/form-errors';
 import { useInviteUser } from '../api/invite-user';
-import { PersonDialogForm } from './person-dialog-form';
+import { DialogForm } from '@/components/ui/dialog-form';
 import {
   PersonFields,
   personProblems,
@@ -74,7 +74,7 @@ function InvitePersonForm({
   };
 
   return (
-    <PersonDialogForm
+    <DialogForm
       title="Invite a person"
       intro="They get an e-mail with a link to choose a password, and can sign in from then on."
       problems={server.general}
@@ -98,7 +98,7 @@ function InvitePersonForm({
         problems={shown}
         scopeOptions={scopeOptions}
       />
-    </PersonDialogForm>
+    </DialogForm>
   );
 }
 
