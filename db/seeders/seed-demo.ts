@@ -37,10 +37,14 @@ async function holdsDemoNetwork(sequelize: Sequelize): Promise<boolean> {
 export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
   const parts: string[] = [];
   if (await isEmpty(sequelize, 'regions')) {
-    await seedNetworkAndPeople(sequelize);
-    parts.push('network and people');
+    await seedNetwork(sequelize);
+    parts.push('regions and chapters');
   }
   if (!(await holdsDemoNetwork(sequelize))) return { parts };
+  if (await isEmpty(sequelize, 'users')) {
+    await seedPeople(sequelize);
+    parts.push('demo sign-ins');
+  }
   if (await isEmpty(sequelize, 'blanket_sizes')) {
     await sequelize.transaction((transaction) => seedNetworkSetup(sequelize, transaction));
     parts.push('agencies, campaigns, blanket sizes and settings');
@@ -68,8 +72,7 @@ async function idOf(
   return row.id;
 }
 
-async function seedNetworkAndPeople(sequelize: Sequelize): Promise<void> {
-  const hashes = await Promise.all(DEMO_SIGN_INS.map((person) => hashPassword(person.password)));
+async function seedNetwork(sequelize: Sequelize): Promise<void> {
   await sequelize.transaction(async (transaction) => {
     const qi = sequelize.getQueryInterface();
     for (const region of DEMO_REGIONS) {
@@ -92,7 +95,13 @@ async function seedNetworkAndPeople(sequelize: Sequelize): Promise<void> {
         { transaction },
       );
     }
+  });
+}
 
+async function seedPeople(sequelize: Sequelize): Promise<void> {
+  const hashes = await Promise.all(DEMO_SIGN_INS.map((person) => hashPassword(person.password)));
+  await sequelize.transaction(async (transaction) => {
+    const qi = sequelize.getQueryInterface();
     const now = new Date();
     const people = [];
     for (const [index, person] of DEMO_SIGN_INS.entries()) {
