@@ -2,16 +2,13 @@ import { getConnectionToken } from '@nestjs/sequelize';
 import { addDays, format } from 'date-fns';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
-import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
 import { RECEIPT_IMPORT_FIELDS } from '@tallyloom/core';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, type TestApp } from '../e2e/support/test-app';
+import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
 import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
 import { signInThroughForm, unexpected } from './support/sign-in';
 
-/** `npm test` builds the web app into a folder of its own run; the default is `npm run build`'s. */
-const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packages', 'web', 'dist');
 const lead = DEMO_SIGN_INS.find((person) => person.role === 'chapter_lead')!;
 
 /** 500 parcels of a sheet a chapter kept before Tallyloom; `broken` rows carry a mistake each. */

@@ -1,14 +1,11 @@
 import { format } from 'date-fns';
-import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
 import { PNG } from 'pngjs';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, type TestApp } from '../e2e/support/test-app';
+import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
 import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
 import { signInThroughForm, unexpected } from './support/sign-in';
 
-/** `npm test` builds the web app into a folder of its own run; the default is `npm run build`'s. */
-const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packages', 'web', 'dist');
 const lead = DEMO_SIGN_INS.find((person) => person.role === 'chapter_lead')!;
 
 /** A small photo of a parcel label: a real PNG, made here. */

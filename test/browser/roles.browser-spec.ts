@@ -1,13 +1,9 @@
 import { can, type Policy } from '@tallyloom/core';
-import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, type TestApp } from '../e2e/support/test-app';
+import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
 import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
 import { signInThroughForm, unexpected } from './support/sign-in';
-
-/** `npm test` builds the web app into a folder of its own run; the default is `npm run build`'s. */
-const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packages', 'web', 'dist');
 
 /** Navigation entries and the policy each one needs; a role must see exactly the ones it may use. */
 const NAVIGATION: Array<{ label: string; policy: Policy | null }> = [

@@ -1,14 +1,10 @@
-import { join } from 'node:path';
 import type { Browser } from 'playwright-core';
-import { startTestApp, type TestApp } from '../e2e/support/test-app';
+import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
 import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
 import { signInThroughForm, unexpected } from './support/sign-in';
 
 const staff = DEMO_SIGN_INS.find((person) => person.role === 'national_staff')!;
-
-/** `npm test` builds the web app into a folder of its own run; the default is `npm run build`'s. */
-const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packages', 'web', 'dist');
 
 // A browser journey takes seconds, not the unit-test default of five.
 jest.setTimeout(60_000);

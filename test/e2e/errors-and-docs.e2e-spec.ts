@@ -1,10 +1,7 @@
 import type { ApiErrorBody } from '@tallyloom/core';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
-import { startTestApp, type TestApp } from './support/test-app';
-
-/** `npm test` builds the web app into a folder of its own run; the default is `npm run build`'s. */
-const WEB_DIST = process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', 'packages', 'web', 'dist');
+import { startTestApp, WEB_DIST, type TestApp } from './support/test-app';
 
 describe('unknown routes, OpenAPI and the served web app', () => {
   let testApp: TestApp;

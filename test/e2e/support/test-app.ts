@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import type { INestApplication } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import type { Server } from 'node:http';
+import { join } from 'node:path';
 import request from 'supertest';
 import { createApp } from '../../../services/api/src/app.factory';
 
@@ -39,3 +40,7 @@ export async function startTestApp(overrides: Record<string, string> = {}): Prom
 export function uniqueSuffix(): string {
   return `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 6)}`.toUpperCase();
 }
+
+/** The built web app: `npm test` builds it into a folder of its own run; else `npm run build`'s. */
+export const WEB_DIST =
+  process.env.WEB_DIST_DIR ?? join(__dirname, '..', '..', '..', 'packages', 'web', 'dist');

@@ -131,8 +131,7 @@ export class AgenciesService {
           );
         }
         const after = auditableAgency(agency, chapterIds);
-        if (JSON.stringify(before) === JSON.stringify(after)) return;
-        await this.audit.record(
+        await this.audit.recordChange(
           context,
           {
             action: 'partner_agency.updated',

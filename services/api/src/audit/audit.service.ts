@@ -41,4 +41,18 @@ export class AuditService {
       { transaction },
     );
   }
+
+  /**
+   * For updates: records the entry only when `before` and `after` differ, so an edit that
+   * changes nothing leaves no trace. Returns whether an entry was written.
+   */
+  async recordChange(
+    context: RequestContext,
+    record: AuditRecord & { before: Record<string, unknown>; after: Record<string, unknown> },
+    transaction?: Transaction,
+  ): Promise<boolean> {
+    if (JSON.stringify(record.before) === JSON.stringify(record.after)) return false;
+    await this.record(context, record, transaction);
+    return true;
+  }
 }

@@ -95,19 +95,17 @@ export class BlanketSizesService {
           { transaction },
         );
         const after = auditableSize(found);
-        if (JSON.stringify(before) !== JSON.stringify(after)) {
-          await this.audit.record(
-            context,
-            {
-              action: 'blanket_size.updated',
-              entityType: 'blanket_size',
-              entityId: id,
-              before,
-              after,
-            },
-            transaction,
-          );
-        }
+        await this.audit.recordChange(
+          context,
+          {
+            action: 'blanket_size.updated',
+            entityType: 'blanket_size',
+            entityId: id,
+            before,
+            after,
+          },
+          transaction,
+        );
         return found;
       })
       .catch((error: unknown) => {

@@ -129,8 +129,7 @@ export class CampaignsService {
         await this.check(fields, body, id, transaction);
         await campaign.update(fields, { transaction });
         const after = auditableCampaign(campaign);
-        if (JSON.stringify(before) === JSON.stringify(after)) return;
-        await this.audit.record(
+        await this.audit.recordChange(
           context,
           { action: 'campaign.updated', entityType: 'campaign', entityId: id, before, after },
           transaction,

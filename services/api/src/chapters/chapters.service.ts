@@ -92,8 +92,7 @@ export class ChaptersService {
         await this.check(fields, body, id, transaction);
         await chapter.update(fields, { transaction });
         const after = auditableChapter(chapter);
-        if (JSON.stringify(before) === JSON.stringify(after)) return;
-        await this.audit.record(
+        await this.audit.recordChange(
           context,
           { action: 'chapter.updated', entityType: 'chapter', entityId: id, before, after },
           transaction,

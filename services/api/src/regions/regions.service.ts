@@ -92,8 +92,7 @@ export class RegionsService {
           { transaction },
         );
         const after = auditableRegion(region);
-        if (JSON.stringify(before) === JSON.stringify(after)) return;
-        await this.audit.record(
+        await this.audit.recordChange(
           context,
           { action: 'region.updated', entityType: 'region', entityId: id, before, after },
           transaction,

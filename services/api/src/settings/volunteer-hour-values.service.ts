@@ -98,19 +98,17 @@ export class VolunteerHourValuesService {
           { transaction },
         );
         const after = auditableHourValue(found);
-        if (JSON.stringify(before) !== JSON.stringify(after)) {
-          await this.audit.record(
-            context,
-            {
-              action: 'volunteer_hour_value.updated',
-              entityType: 'volunteer_hour_value',
-              entityId: id,
-              before,
-              after,
-            },
-            transaction,
-          );
-        }
+        await this.audit.recordChange(
+          context,
+          {
+            action: 'volunteer_hour_value.updated',
+            entityType: 'volunteer_hour_value',
+            entityId: id,
+            before,
+            after,
+          },
+          transaction,
+        );
         return found;
       })
       .catch((error: unknown) => {

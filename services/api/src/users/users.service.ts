@@ -158,14 +158,13 @@ export class UsersService {
         await this.refreshTokens.revokeAllForUser(user.id, 'deactivated', transaction);
       }
       const after = auditableUser(user);
-      if (JSON.stringify(before) === JSON.stringify(after)) return;
       const action =
         body.active === false && before.active
           ? 'user.deactivated'
           : body.active === true && !before.active
             ? 'user.reactivated'
             : 'user.updated';
-      await this.audit.record(
+      await this.audit.recordChange(
         context,
         { action, entityType: 'user', entityId: user.id, before, after },
         transaction,
