@@ -3,6 +3,7 @@ import { createRegionsAndChapters } from './20261201-0001-create-regions-and-cha
 import { createPeopleAndAuditLog } from './20261201-0002-create-people-and-audit-log';
 import { createNetworkSetup } from './20261201-0003-create-network-setup';
 import { createParcelReceipts } from './20261201-0004-create-parcel-receipts';
+import { createMonthlyTallies } from './20261202-0005-create-monthly-tallies';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
 export const MIGRATIONS: Migration[] = [
@@ -10,4 +11,5 @@ export const MIGRATIONS: Migration[] = [
   createPeopleAndAuditLog,
   createNetworkSetup,
   createParcelReceipts,
+  createMonthlyTallies,
 ];

@@ -17,3 +17,4 @@ export * from './contract/network-setup';
 export * from './contract/receipts';
 export * from './panels/size-chart';
 export * from './contract/receipt-import';
+export * from './contract/tallies';

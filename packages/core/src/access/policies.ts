@@ -27,6 +27,18 @@ export const POLICIES = {
   'senders.read': ['network_admin', 'national_staff', 'chapter_lead', 'auditor'],
   /** Erase a sender's personal data while keeping the counts. */
   'senders.erase': ['network_admin'],
+  /** Read monthly tallies and their revisions (in scope); grant writers see aggregates only. */
+  'tallies.read': [
+    'network_admin',
+    'national_staff',
+    'regional_coordinator',
+    'chapter_lead',
+    'auditor',
+  ],
+  /** Draft, edit, submit and amend monthly tallies (chapter leads for their own chapter). */
+  'tallies.write': ['network_admin', 'national_staff', 'chapter_lead'],
+  /** Approve or return submitted tallies (coordinators for their own region). */
+  'tallies.review': ['network_admin', 'national_staff', 'regional_coordinator'],
   /** Invite people, change their role or scope, deactivate them. */
   'people.manage': ['network_admin'],
   /** Read the e-mails the development mail catcher has captured. */
