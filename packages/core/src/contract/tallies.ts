@@ -118,7 +118,12 @@ export interface TallyCheckContext {
    * Opening stock that follows from last month's closing stock; null when the opening is
    * entered by hand (a chapter's first tally).
    */
-  expectedOpening: { panels: number; blankets: number; fromMonth: MonthKey; approved: boolean } | null;
+  expectedOpening: {
+    panels: number;
+    blankets: number;
+    fromMonth: MonthKey;
+    approved: boolean;
+  } | null;
   /** Headline counts of the chapter's last (up to) 12 approved months, oldest first. */
   history: Array<{ month: MonthKey } & Record<HeadlineCount, number>>;
   /** Warn when people served exceed blankets given × this factor (a network setting). */
@@ -228,7 +233,8 @@ export interface TallyRevisionView extends TallyRevisionSummary {
   acknowledgementNote: string | null;
 }
 
-export type TallyEventKind = 'created' | 'submitted' | 'returned' | 'approved' | 'amendment_started';
+export type TallyEventKind =
+  'created' | 'submitted' | 'returned' | 'approved' | 'amendment_started';
 
 /** The review trail: each transition with who, when and the comment or reason given. */
 export interface TallyEvent {
