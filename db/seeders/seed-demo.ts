@@ -4,6 +4,7 @@ import { DEMO_REGIONS } from './demo-scenario';
 import { DEMO_SIGN_INS } from './demo-sign-ins';
 import { seedNetworkSetup } from './seed-network-setup';
 import { seedReceipts } from './seed-receipts';
+import { seedTallies } from './seed-tallies';
 
 export interface SeedOutcome {
   /** What was loaded this time, e.g. ["network and people", "parcel receipts"]; empty when nothing. */
@@ -53,6 +54,11 @@ export async function seedDemo(sequelize: Sequelize): Promise<SeedOutcome> {
     // In its own transactions: two years of parcels is a lot of rows.
     await seedReceipts(sequelize);
     parts.push('parcel receipts');
+  }
+  if (await isEmpty(sequelize, 'monthly_tallies')) {
+    // After the receipts: the tallies' figures follow them.
+    await seedTallies(sequelize);
+    parts.push('monthly tallies');
   }
   return { parts };
 }

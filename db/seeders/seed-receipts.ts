@@ -2,36 +2,18 @@ import { createHash } from 'node:crypto';
 import { mkdir, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import { PNG } from 'pngjs';
-import { QueryTypes, type Sequelize, type Transaction } from 'sequelize';
+import { QueryTypes, type Sequelize } from 'sequelize';
 import {
   DEFAULT_UPLOADS_DIR,
   newStorageKey,
   pathForKey,
 } from '../../services/api/src/storage/storage-layout';
+import { inBatches } from './bulk-insert';
+import { between, chance, mulberry32, pick, type Random } from './demo-random';
 
 /** The demo history runs from here (or a chapter's start, if later) to the end of November 2026. */
 const HISTORY_FROM = '2024-10-01';
 const HISTORY_TO = '2026-11-30';
-const BATCH_SIZE = 400;
-
-/** A tiny seeded generator (mulberry32), so the demo network is the same on every machine. */
-function mulberry32(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (state + 0x6d2b79f5) >>> 0;
-    let t = state;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
-
-type Random = () => number;
-const between = (random: Random, low: number, high: number) =>
-  low + Math.floor(random() * (high - low + 1));
-const pick = <T>(random: Random, items: readonly T[]): T =>
-  items[between(random, 0, items.length - 1)];
-const chance = (random: Random, p: number) => random() < p;
 
 // Invented makers at reserved example domains.
 const FIRST_NAMES = [
@@ -166,19 +148,6 @@ function mistype(code: string, random: Random): string {
   ];
   const chosen = pick(random, variants);
   return chosen.toUpperCase() === code.toUpperCase() ? `${code}X` : chosen;
-}
-
-async function inBatches(
-  sequelize: Sequelize,
-  table: string,
-  rows: object[],
-  transaction: Transaction,
-): Promise<void> {
-  for (let start = 0; start < rows.length; start += BATCH_SIZE) {
-    await sequelize
-      .getQueryInterface()
-      .bulkInsert(table, rows.slice(start, start + BATCH_SIZE), { transaction });
-  }
 }
 
 /** Two years of parcel receipts for the demo network, some with generated scans. */
