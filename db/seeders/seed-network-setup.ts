@@ -109,6 +109,7 @@ const DEMO_SETTINGS: Record<string, number> = {
   fiscalYearStartMonth: 7,
   panelToleranceIn: 0.5,
   receiptCountCeiling: 10000,
+  servedPerBlanketWarnFactor: 3,
 };
 
 const VOLUNTEER_HOUR_VALUES = [

@@ -11,9 +11,12 @@ import {
 import { inBatches } from './bulk-insert';
 import { between, chance, mulberry32, pick, type Random } from './demo-random';
 
-/** The demo history runs from here (or a chapter's start, if later) to the end of November 2026. */
+/**
+ * The demo history runs from here (or a chapter's start, if later) to yesterday, so a demo seeded
+ * in a later month still has parcels behind every month its tallies cover.
+ */
 const HISTORY_FROM = '2024-10-01';
-const HISTORY_TO = '2026-11-30';
+const HISTORY_TO = new Date(Date.now() - 24 * 60 * 60 * 1000).toISOString().slice(0, 10);
 
 // Invented makers at reserved example domains.
 const FIRST_NAMES = [

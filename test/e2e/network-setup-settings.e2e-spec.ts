@@ -53,6 +53,7 @@ describe('network set-up: settings', () => {
     // common practice: charity panel guidance commonly accepts about ±½ in
     panelToleranceIn: 0.5,
     receiptCountCeiling: 10_000,
+    servedPerBlanketWarnFactor: 3,
   };
 
   it('answers the defaults when nothing is stored, to every role', async () => {
@@ -68,6 +69,7 @@ describe('network set-up: settings', () => {
       'fiscalYearStartMonth',
       'panelToleranceIn',
       'receiptCountCeiling',
+      'servedPerBlanketWarnFactor',
     ]);
     expect((await get().expect(200)).body).toEqual(DEFAULTS);
   });
@@ -95,6 +97,12 @@ describe('network set-up: settings', () => {
     ]);
   });
 
+  it('takes a served-per-blanket factor with one decimal', async () => {
+    const changed = { ...DEFAULTS, servedPerBlanketWarnFactor: 2.5 };
+    expect((await put(changed).expect(200)).body).toEqual(changed);
+    expect((await get().expect(200)).body).toEqual(changed);
+  });
+
   it('writes no audit entry when nothing changes', async () => {
     const requestId = aRequestId('settings-same');
     await put(DEFAULTS, admin, requestId).expect(200);
@@ -105,6 +113,8 @@ describe('network set-up: settings', () => {
   const TOLERANCE =
     'panelToleranceIn must be a number of inches from 0 to 3, with at most 2 decimals';
   const CEILING = 'receiptCountCeiling must be a whole number from 1 to 1,000,000';
+  const FACTOR =
+    'servedPerBlanketWarnFactor must be a number from 1 to 100, with at most 1 decimal';
   it.each([
     ['fiscalYearStartMonth', { fiscalYearStartMonth: 0 }, MONTH],
     ['fiscalYearStartMonth', { fiscalYearStartMonth: 13 }, MONTH],
@@ -116,6 +126,11 @@ describe('network set-up: settings', () => {
     ['panelToleranceIn', { panelToleranceIn: '0.5' }, TOLERANCE],
     ['receiptCountCeiling', { receiptCountCeiling: 0 }, CEILING],
     ['receiptCountCeiling', { receiptCountCeiling: 1_000_001 }, CEILING],
+    ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: 0.9 }, FACTOR],
+    ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: 100.5 }, FACTOR],
+    ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: 2.25 }, FACTOR],
+    ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: '3' }, FACTOR],
+    ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: undefined }, FACTOR],
   ])(
     'refuses a bad %s with 400 naming it, and stores nothing (%j)',
     async (field, override, message) => {

@@ -9,6 +9,7 @@ import {
 } from '../../services/api/src/common/access/access.decorators';
 import { receiptImportRouteParams } from './fixtures/receipt-imports';
 import { receiptRouteParams } from './fixtures/receipts';
+import { tallyRouteParams } from './fixtures/tallies';
 import { aRegion } from './support/network-builders';
 import { aUser, signedIn } from './support/people-builders';
 import { networkSetupRouteParams } from './support/setup-builders';
@@ -111,6 +112,12 @@ describe('every route × every role × in and out of scope', () => {
         away.chapters[0].id,
       )),
       ...(await receiptImportRouteParams(
+        testApp,
+        tokens.get('network_admin')!,
+        home.chapters[0].id,
+        away.chapters[0].id,
+      )),
+      ...(await tallyRouteParams(
         testApp,
         tokens.get('network_admin')!,
         home.chapters[0].id,

@@ -18,6 +18,7 @@ import { CampaignsModule } from './campaigns/campaigns.module';
 import { BlanketSizesModule } from './blanket-sizes/blanket-sizes.module';
 import { SettingsModule } from './settings/settings.module';
 import { ReceiptsModule } from './receipts/receipts.module';
+import { TalliesModule } from './tallies/tallies.module';
 
 /** The whole application; built by a function so each instance validates the environment anew. */
 @Module({})
@@ -62,6 +63,7 @@ export class AppModule {
         BlanketSizesModule,
         SettingsModule,
         ReceiptsModule,
+        TalliesModule,
       ],
     };
   }

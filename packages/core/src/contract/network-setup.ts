@@ -105,6 +105,8 @@ export interface NetworkSettings {
   panelToleranceIn: number;
   /** A count above this on one receipt is refused as implausible. */
   receiptCountCeiling: number;
+  /** A tally warns when people served exceed blankets given × this factor. */
+  servedPerBlanketWarnFactor: number;
 }
 
 export interface VolunteerHourValueView {

@@ -66,6 +66,7 @@ export const demoSettings: NetworkSettings = {
   fiscalYearStartMonth: 7,
   panelToleranceIn: 0.5,
   receiptCountCeiling: 5_000,
+  servedPerBlanketWarnFactor: 3,
 };
 
 export const demoScans: ScanView[] = [

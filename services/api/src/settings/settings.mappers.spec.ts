@@ -8,6 +8,7 @@ describe('settingsFromRows', () => {
       // common practice: charity panel guidance commonly accepts about ±½ in
       panelToleranceIn: 0.5,
       receiptCountCeiling: 10_000,
+      servedPerBlanketWarnFactor: 3,
     });
   });
 
@@ -17,7 +18,12 @@ describe('settingsFromRows', () => {
         { key: 'fiscalYearStartMonth', value: 1 },
         { key: 'panelToleranceIn', value: '0.75' },
       ]),
-    ).toEqual({ fiscalYearStartMonth: 1, panelToleranceIn: 0.75, receiptCountCeiling: 10_000 });
+    ).toEqual({
+      fiscalYearStartMonth: 1,
+      panelToleranceIn: 0.75,
+      receiptCountCeiling: 10_000,
+      servedPerBlanketWarnFactor: 3,
+    });
   });
 
   it('keeps the default for an unknown key or an unreadable value', () => {

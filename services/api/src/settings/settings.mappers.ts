@@ -8,6 +8,8 @@ export const DEFAULT_SETTINGS: Readonly<NetworkSettings> = {
   fiscalYearStartMonth: 7,
   panelToleranceIn: DEFAULT_PANEL_TOLERANCE_IN,
   receiptCountCeiling: 10_000,
+  // Our own default, not a published figure: a blanket may serve a family, rarely more.
+  servedPerBlanketWarnFactor: 3,
 };
 
 export const SETTING_KEYS = Object.keys(DEFAULT_SETTINGS) as Array<keyof NetworkSettings>;

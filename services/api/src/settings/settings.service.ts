@@ -31,6 +31,7 @@ export class SettingsService {
         fiscalYearStartMonth: body.fiscalYearStartMonth,
         panelToleranceIn: body.panelToleranceIn,
         receiptCountCeiling: body.receiptCountCeiling,
+        servedPerBlanketWarnFactor: body.servedPerBlanketWarnFactor,
       };
       const changed = SETTING_KEYS.filter((key) => before[key] !== after[key]);
       if (changed.length === 0) return after;

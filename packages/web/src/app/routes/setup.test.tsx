@@ -50,6 +50,7 @@ const storedSettings: NetworkSettings = {
   fiscalYearStartMonth: 7,
   panelToleranceIn: 0.5,
   receiptCountCeiling: 10000,
+  servedPerBlanketWarnFactor: 3,
 };
 
 function mockSetupApi(extra: Handlers = {}) {
@@ -363,6 +364,9 @@ describe('settings', () => {
     const ceiling = screen.getByLabelText(/^Receipt count ceiling/);
     await user.clear(ceiling);
     await user.type(ceiling, '5000');
+    const factor = screen.getByLabelText(/^People served per blanket/);
+    await user.clear(factor);
+    await user.type(factor, '2.5');
     await user.click(screen.getByRole('button', { name: 'Save settings' }));
 
     expect(await screen.findByText('Settings saved.')).toBeInTheDocument();
@@ -371,6 +375,7 @@ describe('settings', () => {
       fiscalYearStartMonth: 4,
       panelToleranceIn: 0.25,
       receiptCountCeiling: 5000,
+      servedPerBlanketWarnFactor: 2.5,
     });
   });
 

@@ -65,6 +65,20 @@ export const OptionalTextField = (maxLength: number, example?: string) =>
     MaxLength(maxLength, { message: `$property must be at most ${maxLength} characters` }),
   );
 
+/** Optional free text: trimmed; empty becomes null, so a blank form field means "none". */
+export const NullableTextField = (maxLength: number, example?: string, description?: string) =>
+  applyDecorators(
+    ApiPropertyOptional({ type: String, nullable: true, maxLength, example, description }),
+    Transform(({ value }: { value: unknown }) => {
+      if (typeof value !== 'string') return value;
+      const trimmed = value.trim();
+      return trimmed === '' ? null : trimmed;
+    }),
+    IsOptional(),
+    IsString({ message: '$property must be text' }),
+    MaxLength(maxLength, { message: `$property must be at most ${maxLength} characters` }),
+  );
+
 /** An opaque token from an e-mailed link. */
 export const TokenField = () =>
   applyDecorators(

@@ -49,19 +49,8 @@ export const DateField = (options: { optional?: boolean; description?: string } 
     IsISO8601({ strict: true }, { message: '$property must be a real calendar date' }),
   );
 
-/** Optional free text: trimmed; empty becomes null, so a blank form field means "none". */
-export const NullableTextField = (maxLength: number, example?: string) =>
-  applyDecorators(
-    ApiPropertyOptional({ type: String, nullable: true, maxLength, example }),
-    Transform(({ value }: { value: unknown }) => {
-      if (typeof value !== 'string') return value;
-      const trimmed = value.trim();
-      return trimmed === '' ? null : trimmed;
-    }),
-    IsOptional(),
-    IsString({ message: '$property must be text' }),
-    MaxLength(maxLength, { message: `$property must be at most ${maxLength} characters` }),
-  );
+/** Optional free text (shared with other features). */
+export { NullableTextField } from '../../common/validation/fields';
 
 export const NullableEmailField = () =>
   applyDecorators(

@@ -6,6 +6,9 @@ import { WholeNumberField } from '../../common/validation/fields';
 const TOLERANCE =
   'panelToleranceIn must be a number of inches from 0 to 3, with at most 2 decimals';
 
+const SERVED_FACTOR =
+  'servedPerBlanketWarnFactor must be a number from 1 to 100, with at most 1 decimal';
+
 /** The network's settings, read and written whole. */
 export class NetworkSettingsDto implements NetworkSettings {
   @WholeNumberField(1, 12, {
@@ -30,4 +33,18 @@ export class NetworkSettingsDto implements NetworkSettings {
     description: 'A count above this on one receipt is refused as implausible',
   })
   receiptCountCeiling: number;
+
+  @ApiProperty({
+    example: 3,
+    minimum: 1,
+    maximum: 100,
+    description: 'A tally warns when people served exceed blankets given × this factor',
+  })
+  @Max(100, { message: SERVED_FACTOR })
+  @Min(1, { message: SERVED_FACTOR })
+  @IsNumber(
+    { allowNaN: false, allowInfinity: false, maxDecimalPlaces: 1 },
+    { message: SERVED_FACTOR },
+  )
+  servedPerBlanketWarnFactor: number;
 }

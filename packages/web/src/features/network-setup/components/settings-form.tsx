@@ -19,12 +19,14 @@ const settingsFields: SettingsField[] = [
   'fiscalYearStartMonth',
   'panelToleranceIn',
   'receiptCountCeiling',
+  'servedPerBlanketWarnFactor',
 ];
 
 const headingId = 'settings-heading';
 
 const TOLERANCE = { min: 0, max: 3, decimals: 2 };
 const MAX_CEILING = 1_000_000;
+const SERVED_FACTOR = { min: 1, max: 100, decimals: 1 };
 
 /** 1 → "January" … 12 → "December". */
 const MONTHS = Array.from({ length: 12 }, (_, index) => ({
@@ -48,6 +50,7 @@ interface SettingsDraft {
   fiscalYearStartMonth: string;
   panelToleranceIn: string;
   receiptCountCeiling: string;
+  servedPerBlanketWarnFactor: string;
 }
 
 function settingsProblems(draft: SettingsDraft): Partial<Record<SettingsField, string>> {
@@ -58,6 +61,8 @@ function settingsProblems(draft: SettingsDraft): Partial<Record<SettingsField, s
     problems.panelToleranceIn = 'Enter inches from 0 to 3, with at most 2 decimals.';
   if (parseWholeNumber(draft.receiptCountCeiling, 1, MAX_CEILING) === undefined)
     problems.receiptCountCeiling = 'Enter a whole number from 1 to 1,000,000.';
+  if (parseDecimal(draft.servedPerBlanketWarnFactor, SERVED_FACTOR) === undefined)
+    problems.servedPerBlanketWarnFactor = 'Enter a number from 1 to 100, with at most 1 decimal.';
   return problems;
 }
 
@@ -77,6 +82,7 @@ function SettingsFormFields({ settings }: { settings: NetworkSettings }) {
     fiscalYearStartMonth: String(settings.fiscalYearStartMonth),
     panelToleranceIn: String(settings.panelToleranceIn),
     receiptCountCeiling: String(settings.receiptCountCeiling),
+    servedPerBlanketWarnFactor: String(settings.servedPerBlanketWarnFactor),
   });
   const [submitted, setSubmitted] = useState(false);
   const change = (changes: Partial<SettingsDraft>) => setDraft({ ...draft, ...changes });
@@ -96,6 +102,7 @@ function SettingsFormFields({ settings }: { settings: NetworkSettings }) {
         fiscalYearStartMonth: Number(draft.fiscalYearStartMonth),
         panelToleranceIn: Number(draft.panelToleranceIn.trim()),
         receiptCountCeiling: Number(draft.receiptCountCeiling.trim()),
+        servedPerBlanketWarnFactor: Number(draft.servedPerBlanketWarnFactor.trim()),
       },
       { onSuccess: () => notify('Settings saved.') },
     );
@@ -148,6 +155,19 @@ function SettingsFormFields({ settings }: { settings: NetworkSettings }) {
           step={1}
           value={draft.receiptCountCeiling}
           onChange={(_event, data) => change({ receiptCountCeiling: data.value })}
+        />
+      </Field>
+      <Field
+        label="People served per blanket, warn above"
+        hint="A monthly tally warns when people served exceed the blankets given out × this number."
+        validationMessage={shown.servedPerBlanketWarnFactor}
+      >
+        <Input
+          name="servedPerBlanketWarnFactor"
+          inputMode="decimal"
+          autoComplete="off"
+          value={draft.servedPerBlanketWarnFactor}
+          onChange={(_event, data) => change({ servedPerBlanketWarnFactor: data.value })}
         />
       </Field>
       <div className={styles.actions}>
