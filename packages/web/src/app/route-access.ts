@@ -25,6 +25,11 @@ export const routeAccess = {
   receiptNew: { name: 'Log a parcel', policy: 'receipts.write' },
   receiptImport: { name: 'Import parcels', policy: 'receipts.write' },
   receiptEdit: { name: 'Correct a parcel', policy: 'receipts.write' },
+  tallies: { name: 'Monthly tallies', policy: 'tallies.read' },
+  tally: { name: 'Monthly tally', policy: 'tallies.read' },
+  tallyRevisions: { name: 'Compare revisions', policy: 'tallies.read' },
+  tallyReview: { name: 'Review tallies', policy: 'tallies.review' },
+  tallyReviewItem: { name: 'Review a tally', policy: 'tallies.review' },
   setup: { name: 'Network set-up', policy: 'network.manage' },
   account: { name: 'My account', policy: null },
 } as const satisfies Record<string, RouteAccess>;

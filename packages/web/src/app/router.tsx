@@ -3,6 +3,8 @@ import { useMemo } from 'react';
 import { createBrowserRouter, RouterProvider, type RouteObject } from 'react-router-dom';
 import { LoadingState } from '@/components/ui/loading-state';
 import { paths } from '@/config/paths';
+import { getTallyQueryOptions } from '@/features/tallies/api';
+import { parseTallyId } from '@/features/tally-review/tally-id';
 import { requireAccess, routeAccess, type AccessHandle } from './route-access';
 import { AcceptInvitationRoute } from './routes/accept-invitation';
 import { AccountRoute } from './routes/account';
@@ -184,6 +186,63 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               loader: requireAccess(routeAccess.receiptEdit),
               errorElement: pageError,
               handle: { access: routeAccess.receiptEdit } satisfies AccessHandle,
+            },
+            {
+              path: paths.tallies.path,
+              lazy: async () => ({ Component: (await import('./routes/tallies')).TalliesRoute }),
+              loader: requireAccess(routeAccess.tallies),
+              // Choosing a chapter changes only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.tallies } satisfies AccessHandle,
+            },
+            {
+              path: paths.tally.path,
+              // The form and its live checks are the heavy part: they load when first opened.
+              lazy: async () => ({ Component: (await import('./routes/tally')).TallyRoute }),
+              loader: requireAccess(routeAccess.tally),
+              errorElement: pageError,
+              handle: { access: routeAccess.tally } satisfies AccessHandle,
+            },
+            {
+              path: paths.tallyReview.path,
+              lazy: async () => ({
+                Component: (await import('./routes/tally-review')).TallyReviewRoute,
+              }),
+              loader: requireAccess(routeAccess.tallyReview),
+              // Filters, page and order change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.tallyReview } satisfies AccessHandle,
+            },
+            {
+              path: paths.tallyReviewItem.path,
+              // The review page carries the charts: ECharts loads with it, not with the app.
+              lazy: async () => ({
+                Component: (await import('./routes/tally-review-item')).TallyReviewItemRoute,
+              }),
+              // The tally is asked for while the page's code (and ECharts) still loads.
+              loader: requireAccess(routeAccess.tallyReviewItem, ({ params }) => {
+                const id = parseTallyId(params.id);
+                if (id !== undefined) void queryClient.prefetchQuery(getTallyQueryOptions(id));
+                return null;
+              }),
+              errorElement: pageError,
+              handle: { access: routeAccess.tallyReviewItem } satisfies AccessHandle,
+            },
+            {
+              path: paths.tallyRevisions.path,
+              lazy: async () => ({
+                Component: (await import('./routes/tally-revisions')).TallyRevisionsRoute,
+              }),
+              loader: requireAccess(routeAccess.tallyRevisions),
+              // Choosing other revisions changes only the query string.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.tallyRevisions } satisfies AccessHandle,
             },
             {
               path: paths.account.path,

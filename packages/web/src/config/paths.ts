@@ -48,6 +48,29 @@ export const paths = {
     path: '/receipts/:id/edit',
     getHref: (id: number) => `/receipts/${id}/edit`,
   },
+  tallies: {
+    path: '/tallies',
+    getHref: () => '/tallies',
+  },
+  tally: {
+    path: '/tallies/:id',
+    getHref: (id: number) => `/tallies/${id}`,
+  },
+  tallyRevisions: {
+    path: '/tallies/:id/revisions',
+    /** `left`, `right`: the revisions to compare side by side. */
+    getHref: (id: number, { left, right }: { left?: number; right?: number } = {}) =>
+      `/tallies/${id}/revisions${query({ left: left?.toString(), right: right?.toString() })}`,
+  },
+  tallyReview: {
+    path: '/review',
+    /** `search`: the queue's filters, as the queue keeps them in its URL. */
+    getHref: (search = '') => `/review${search}`,
+  },
+  tallyReviewItem: {
+    path: '/review/:id',
+    getHref: (id: number) => `/review/${id}`,
+  },
   setup: {
     path: '/setup',
     getHref: () => '/setup',

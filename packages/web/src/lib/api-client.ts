@@ -47,6 +47,8 @@ export interface RequestOptions {
    * token, and a 401 is the answer itself, not a sign that the token needs renewing.
    */
   anonymous?: boolean;
+  /** Extra request headers, e.g. an `Idempotency-Key` that makes a retried submission count once. */
+  headers?: Record<string, string>;
 }
 
 export interface RequestWithBodyOptions extends RequestOptions {
@@ -116,7 +118,7 @@ async function send(
   options: RequestWithBodyOptions,
   accessToken?: string,
 ): Promise<Response> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+  const headers: Record<string, string> = { ...options.headers, Accept: 'application/json' };
   // A multipart form (a file upload) sets its own Content-Type, with the boundary.
   const multipart = options.body instanceof FormData;
   if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';

@@ -69,6 +69,8 @@ describe('navigation by role', () => {
     expect(await navigationLinks(demoPeople.admin)).toEqual([
       'Network',
       'Parcels',
+      'Monthly tallies',
+      'Review',
       'System status',
       'People',
       'Network set-up',
@@ -80,16 +82,27 @@ describe('navigation by role', () => {
     expect(await navigationLinks(demoPeople.staff)).toEqual([
       'Network',
       'Parcels',
+      'Monthly tallies',
+      'Review',
       'System status',
     ]);
   });
 
-  it('gives a chapter lead neither People, Network set-up nor the dev outbox', async () => {
-    expect(await navigationLinks(demoPeople.chapterLead)).toEqual(['Network', 'Parcels']);
+  it('gives a chapter lead their monthly tallies first, and neither People, Network set-up nor the dev outbox', async () => {
+    expect(await navigationLinks(demoPeople.chapterLead)).toEqual([
+      'Monthly tallies',
+      'Network',
+      'Parcels',
+    ]);
   });
 
   it('gives a regional coordinator the parcels of their region to read', async () => {
-    expect(await navigationLinks(demoPeople.coordinator)).toEqual(['Network', 'Parcels']);
+    expect(await navigationLinks(demoPeople.coordinator)).toEqual([
+      'Network',
+      'Parcels',
+      'Monthly tallies',
+      'Review',
+    ]);
   });
 
   it('does not show System status, parcels or Network set-up to a grant writer', async () => {

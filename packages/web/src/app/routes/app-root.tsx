@@ -1,12 +1,14 @@
 import {
   BoxMultiple20Regular,
+  CalendarLtr20Regular,
+  ClipboardTaskListLtr20Regular,
   Home20Regular,
   MailInbox20Regular,
   People20Regular,
   Pulse20Regular,
   WrenchSettings20Regular,
 } from '@fluentui/react-icons';
-import { can, ROLE_LABELS, rolesFor, type SessionUser } from '@tallyloom/core';
+import { can, ROLE_LABELS, rolesFor, type Role, type SessionUser } from '@tallyloom/core';
 import type { ReactNode } from 'react';
 import { Navigate, Outlet, useLocation, useMatches } from 'react-router-dom';
 import { AppShell, type AppNavItem } from '@/components/ui/app-shell';
@@ -19,7 +21,13 @@ import { scopeLabel } from '@/lib/scope';
 import { useSession } from '@/lib/session/use-session';
 import { accessOfMatches, mayOpen, routeAccess, type RouteAccess } from '../route-access';
 
-const navItems: Array<AppNavItem & { access: RouteAccess }> = [
+interface NavEntry extends AppNavItem {
+  access: RouteAccess;
+  /** Roles for whom this is the main job: the entry comes first for them. */
+  firstFor?: readonly Role[];
+}
+
+const navItems: NavEntry[] = [
   {
     label: routeAccess.network.name,
     to: paths.network.getHref(),
@@ -32,6 +40,20 @@ const navItems: Array<AppNavItem & { access: RouteAccess }> = [
     to: paths.receipts.getHref(),
     icon: BoxMultiple20Regular,
     access: routeAccess.receipts,
+  },
+  {
+    label: routeAccess.tallies.name,
+    to: paths.tallies.getHref(),
+    icon: CalendarLtr20Regular,
+    access: routeAccess.tallies,
+    firstFor: ['chapter_lead'],
+  },
+  {
+    // Short in the navigation; the page and the "no access" screen use the full name.
+    label: 'Review',
+    to: paths.tallyReview.getHref(),
+    icon: ClipboardTaskListLtr20Regular,
+    access: routeAccess.tallyReview,
   },
   {
     label: routeAccess.status.name,
@@ -59,13 +81,22 @@ const navItems: Array<AppNavItem & { access: RouteAccess }> = [
   },
 ];
 
+/** The entries the person's role opens; their main job's entry first. */
+function navFor(user: SessionUser): AppNavItem[] {
+  const open = navItems.filter((item) => mayOpen(user, item.access));
+  const first = open.filter((item) => item.firstFor?.includes(user.role));
+  return [...first, ...open.filter((item) => !first.includes(item))].map(
+    ({ label, to, icon, end }) => ({ label, to, icon, end }),
+  );
+}
+
 /** The shell as a signed-in person sees it: only the pages their role opens, and who they are. */
 export function SignedInShell({ user, children }: { user: SessionUser; children: ReactNode }) {
   return (
     <AppShell
       productName={appConfig.productName}
       networkName={appConfig.networkName}
-      navItems={navItems.filter((item) => mayOpen(user, item.access))}
+      navItems={navFor(user)}
       headerActions={<UserMenu user={user} />}
     >
       {children}

@@ -1,5 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { ROLE_SCOPE } from '@tallyloom/core';
+import { can, ROLE_SCOPE } from '@tallyloom/core';
 import type { QueryClient } from '@tanstack/react-query';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '@/components/ui/page-header';
@@ -11,6 +11,7 @@ import { CampaignsList } from '@/features/network-setup/components/campaigns-lis
 import { getChaptersQueryOptions } from '@/features/network/api/get-chapters';
 import { getRegionsQueryOptions } from '@/features/network/api/get-regions';
 import { NetworkOverview } from '@/features/network/components/network-overview';
+import { TallyDueCard } from '@/features/tallies/components/tally-due-card';
 import { useSessionUser } from '@/lib/session/use-session';
 
 /** The region filter lives in the URL (`?region=3`) so a filtered view can be bookmarked or shared. */
@@ -78,6 +79,8 @@ export function NetworkRoute() {
         title="Network"
         description={`The regions and chapters of the ${appConfig.networkName}, the agencies they serve and its campaigns.`}
       />
+      {/* A chapter lead's main job is the monthly tally: the way there comes first. */}
+      {ownChapter && can(user?.role, 'tallies.write') ? <TallyDueCard /> : null}
       <NetworkOverview regionId={regionId} onRegionChange={changeRegion} />
       <div className={styles.more}>
         <AgenciesList

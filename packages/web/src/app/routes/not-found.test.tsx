@@ -10,12 +10,12 @@ describe('an unknown address', () => {
       '/api/regions': () => jsonResponse(demoRegions),
       '/api/chapters': () => jsonResponse(demoChapters),
     });
-    const { user } = renderApp('/tallies/2026-13', { as: demoPeople.admin });
+    const { user } = renderApp('/harvests/2026-13', { as: demoPeople.admin });
 
     expect(
       await screen.findByRole('heading', { level: 1, name: 'Page not found' }),
     ).toBeInTheDocument();
-    expect(screen.getByText('/tallies/2026-13')).toBeInTheDocument();
+    expect(screen.getByText('/harvests/2026-13')).toBeInTheDocument();
     expect(screen.getByRole('navigation', { name: 'Main' })).toBeInTheDocument();
 
     await user.click(screen.getByRole('link', { name: 'Back to Network' }));

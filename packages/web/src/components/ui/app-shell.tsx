@@ -21,7 +21,10 @@ const useStyles = makeStyles({
       gridTemplateRows: 'auto auto 1fr',
       gridTemplateAreas: '"header" "nav" "main"',
     },
+    // On paper only the page itself: no top bar, no navigation.
+    '@media print': { display: 'block', minHeight: 0 },
   },
+  noPrint: { '@media print': { display: 'none' } },
   skipLink: {
     position: 'absolute',
     left: '-10000px',
@@ -171,7 +174,7 @@ export function AppShell({
       >
         Skip to content
       </a>
-      <header className={styles.header}>
+      <header className={mergeClasses(styles.header, styles.noPrint)}>
         <div className={styles.identity}>
           <BrandMark />
           <Text size={500} weight="semibold" className={styles.productName}>
@@ -184,7 +187,7 @@ export function AppShell({
         </div>
         {headerActions ? <div className={styles.headerActions}>{headerActions}</div> : null}
       </header>
-      <nav className={styles.nav} aria-label="Main">
+      <nav className={mergeClasses(styles.nav, styles.noPrint)} aria-label="Main">
         <ul className={styles.navList}>
           {navItems.map(({ label, to, icon: Icon, end }) => (
             <li key={to}>

@@ -1,0 +1,11 @@
+export * from './get-tallies';
+export * from './get-tally-calendar';
+export * from './get-tally';
+export * from './get-tally-revision';
+export * from './create-tally';
+export * from './save-tally';
+export * from './submit-tally';
+export * from './approve-tally';
+export * from './return-tally';
+export * from './amend-tally';
+export { refreshAfterTallyWrite } from './invalidate-tally';
