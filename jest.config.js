@@ -14,7 +14,10 @@ const swc = [
 
 const shared = {
   transform: { '^.+\\.ts$': swc },
-  moduleNameMapper: { '^@tallyloom/core$': '<rootDir>/packages/core/src/index.ts' },
+  moduleNameMapper: {
+    '^@tallyloom/core$': '<rootDir>/packages/core/src/index.ts',
+    '^@tallyloom/reports$': '<rootDir>/reports/src/index.ts',
+  },
   testEnvironment: 'node',
   rootDir: __dirname,
 };
@@ -23,6 +26,7 @@ const shared = {
 module.exports = {
   projects: [
     { ...shared, displayName: 'core', testMatch: ['<rootDir>/packages/core/src/**/*.spec.ts'] },
+    { ...shared, displayName: 'reports', testMatch: ['<rootDir>/reports/src/**/*.spec.ts'] },
     { ...shared, displayName: 'api', testMatch: ['<rootDir>/services/api/src/**/*.spec.ts'] },
     { ...shared, displayName: 'db', testMatch: ['<rootDir>/db/**/*.spec.ts'] },
     { ...shared, displayName: 'e2e', testMatch: ['<rootDir>/test/e2e/**/*.e2e-spec.ts'] },

@@ -40,6 +40,7 @@ async function main(): Promise<number> {
     {},
     'The core build',
   );
+  await runCommand('npm', ['run', '--silent', 'build', '-w', 'reports'], {}, 'The reports build');
   // Each run builds into its own folder, so runs side by side never share a half-written build.
   // Outside .data/: Express's sendFile refuses any path with a dot-folder in it (the SPA fallback).
   const webDist = join(tmpdir(), `tallyloom-web-${process.pid}`);

@@ -18,6 +18,7 @@ async function main(): Promise<void> {
     {},
     'The core build',
   );
+  await runCommand('npm', ['run', '--silent', 'build', '-w', 'reports'], {}, 'The reports build');
 
   const api = startLongRunning('npm', ['run', 'dev', '-w', 'services/api'], {
     ...env,

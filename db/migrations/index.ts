@@ -4,6 +4,7 @@ import { createPeopleAndAuditLog } from './20261201-0002-create-people-and-audit
 import { createNetworkSetup } from './20261201-0003-create-network-setup';
 import { createParcelReceipts } from './20261201-0004-create-parcel-receipts';
 import { createMonthlyTallies } from './20261202-0005-create-monthly-tallies';
+import { createReportSnapshots } from './20261202-0006-create-report-snapshots';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
 export const MIGRATIONS: Migration[] = [
@@ -12,4 +13,5 @@ export const MIGRATIONS: Migration[] = [
   createNetworkSetup,
   createParcelReceipts,
   createMonthlyTallies,
+  createReportSnapshots,
 ];

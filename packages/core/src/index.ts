@@ -18,6 +18,7 @@ export * from './contract/receipts';
 export * from './panels/size-chart';
 export * from './contract/receipt-import';
 export * from './contract/tallies';
+export * from './contract/reports';
 export * from './tallies/months';
 export * from './tallies/empty-values';
 export * from './tallies/headline';

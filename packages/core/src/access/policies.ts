@@ -39,6 +39,10 @@ export const POLICIES = {
   'tallies.write': ['network_admin', 'national_staff', 'chapter_lead'],
   /** Approve or return submitted tallies (coordinators for their own region). */
   'tallies.review': ['network_admin', 'national_staff', 'regional_coordinator'],
+  /** Read report snapshots, dashboards and campaign progress (in scope). */
+  'reports.read': [...ROLES],
+  /** See the background jobs, their progress and failures, and retry a failed one. */
+  'jobs.manage': ['network_admin', 'national_staff'],
   /** Invite people, change their role or scope, deactivate them. */
   'people.manage': ['network_admin'],
   /** Read the e-mails the development mail catcher has captured. */

@@ -1,0 +1,2 @@
+// Report definitions: see ../README.md.
+export {};
