@@ -9,10 +9,12 @@ export type PeriodKind = (typeof PERIOD_KINDS)[number];
 
 /**
  * A reporting period. Keys: month 'YYYY-MM'; quarter 'YYYY-Qn' (calendar quarters);
- * fiscal year 'FY2026' = the fiscal year that ENDS in 2026 (start month from settings).
+ * fiscal year 'FY2026' = the fiscal year that ENDS in 2026 (start month from settings);
+ * custom 'YYYY-MM..YYYY-MM'.
  */
 export interface Period {
-  kind: PeriodKind;
+  /** 'custom' only for a dashboard range: snapshots are stored for the three fixed kinds. */
+  kind: PeriodKind | 'custom';
   key: string;
   /** First month, 'YYYY-MM'. */
   from: string;

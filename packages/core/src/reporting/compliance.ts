@@ -1,0 +1,55 @@
+import type { ComplianceFigures } from '../contract/reports';
+import type { MonthKey } from '../contract/tallies';
+import { reportingStatus } from '../tallies/reporting';
+
+export interface ComplianceEntry {
+  month: MonthKey;
+  dueDay: number;
+  /** ISO timestamp of the first submission; null when never submitted. */
+  firstSubmittedAt: string | null;
+}
+
+/**
+ * Reporting compliance of the chapter-months given (one entry per chapter and month expected to
+ * report). 'upcoming' and 'due' are still open: they are neither late nor missing yet.
+ */
+export function complianceOf(
+  entries: ReadonlyArray<ComplianceEntry>,
+  today: string,
+): ComplianceFigures {
+  const figures = emptyCompliance();
+  for (const entry of entries) {
+    figures.expected += 1;
+    switch (reportingStatus({ ...entry, today })) {
+      case 'on-time':
+        figures.onTime += 1;
+        break;
+      case 'late':
+        figures.late += 1;
+        break;
+      case 'missing':
+        figures.missing += 1;
+        break;
+      case 'upcoming':
+      case 'due':
+        figures.open += 1;
+        break;
+    }
+  }
+  return figures;
+}
+
+export function emptyCompliance(): ComplianceFigures {
+  return { expected: 0, onTime: 0, late: 0, missing: 0, open: 0 };
+}
+
+/** Sums compliance of several scopes or months (every chapter-month counted once in each). */
+export function addCompliance(a: ComplianceFigures, b: ComplianceFigures): ComplianceFigures {
+  return {
+    expected: a.expected + b.expected,
+    onTime: a.onTime + b.onTime,
+    late: a.late + b.late,
+    missing: a.missing + b.missing,
+    open: a.open + b.open,
+  };
+}

@@ -1,0 +1,86 @@
+import type { SnapshotFigures } from '../contract/reports';
+import { PEOPLE_GROUPS, type PeopleGroup } from '../contract/tallies';
+
+// Combining snapshot figures. Two different roll-ups:
+// - across scopes (chapters of one period into a region): every measure sums, stock included,
+//   because each chapter holds its own stock;
+// - across time (months into a quarter): flows sum, but stock is a level, not a flow, so the
+//   period's stock is the last month's.
+
+type FlowMeasure = Exclude<
+  keyof SnapshotFigures,
+  'peopleServedByGroup' | 'panelsInStock' | 'blanketsInStock'
+>;
+
+const FLOW_MEASURES: readonly FlowMeasure[] = [
+  'panelsAccepted',
+  'panelsSetAside',
+  'panelsUsed',
+  'blanketsAssembled',
+  'blanketsReceived',
+  'blanketsGiven',
+  'peopleServed',
+  'volunteerHours',
+  'yarnKg',
+  'approvedTallies',
+];
+
+function emptyGroups(): Record<PeopleGroup, number> {
+  return Object.fromEntries(PEOPLE_GROUPS.map((group) => [group, 0])) as Record<
+    PeopleGroup,
+    number
+  >;
+}
+
+/** Figures of a scope and period with no approved tally: every measure 0. */
+export function emptySnapshotFigures(): SnapshotFigures {
+  const figures = { peopleServedByGroup: emptyGroups(), panelsInStock: 0, blanketsInStock: 0 };
+  for (const measure of FLOW_MEASURES) (figures as Record<string, unknown>)[measure] = 0;
+  return figures as SnapshotFigures;
+}
+
+function sumFlows(a: SnapshotFigures, b: SnapshotFigures): SnapshotFigures {
+  const sum = emptySnapshotFigures();
+  for (const measure of FLOW_MEASURES) sum[measure] = a[measure] + b[measure];
+  // Decimal measures (hours, kg) would drift in binary floating point: keep 3 decimals.
+  sum.volunteerHours = roundTo3(sum.volunteerHours);
+  sum.yarnKg = roundTo3(sum.yarnKg);
+  for (const group of PEOPLE_GROUPS) {
+    sum.peopleServedByGroup[group] =
+      (a.peopleServedByGroup[group] ?? 0) + (b.peopleServedByGroup[group] ?? 0);
+  }
+  return sum;
+}
+
+function roundTo3(value: number): number {
+  return Math.round(value * 1000) / 1000;
+}
+
+/** Adds the figures of two scopes for the same period (e.g. two chapters of a region). */
+export function addSnapshotFigures(a: SnapshotFigures, b: SnapshotFigures): SnapshotFigures {
+  const sum = sumFlows(a, b);
+  sum.panelsInStock = a.panelsInStock + b.panelsInStock;
+  sum.blanketsInStock = a.blanketsInStock + b.blanketsInStock;
+  return sum;
+}
+
+/**
+ * Rolls consecutive periods of ONE chapter (oldest first) into one longer period: flows sum, and
+ * the stock is that of the last period with an approved tally (the chapter's latest known
+ * closing stock). For a region or the network, roll each chapter up in time first and then add
+ * the chapters: a region's month may lack a late chapter whose stock is still known from an
+ * earlier month. Empty input gives empty figures.
+ */
+export function combineMonthsInto(periodFigures: ReadonlyArray<SnapshotFigures>): SnapshotFigures {
+  let combined = emptySnapshotFigures();
+  for (const figures of periodFigures) {
+    const stock =
+      figures.approvedTallies > 0
+        ? { panels: figures.panelsInStock, blankets: figures.blanketsInStock }
+        : { panels: combined.panelsInStock, blankets: combined.blanketsInStock };
+    combined = sumFlows(combined, figures);
+    combined.panelsInStock = stock.panels;
+    combined.blanketsInStock = stock.blankets;
+  }
+  return combined;
+}
