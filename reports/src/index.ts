@@ -1,2 +1,7 @@
 // Report definitions: see ../README.md.
-export {};
+export * from './sql';
+export * from './tally-snapshot';
+export * from './chapter-month-facts';
+export * from './campaign-credit';
+export * from './tally-status';
+export * from './tally-snapshot-rollup';

@@ -1,0 +1,127 @@
+import { emptySnapshotFigures, quarterPeriod, type SnapshotFigures } from '@tallyloom/core';
+import type { ChapterMonthFact } from './chapter-month-facts';
+import {
+  rollUpSnapshots,
+  targetsOfChapterMonth,
+  targetsOfMonths,
+  type ChapterInfo,
+  type TallyStatus,
+} from './tally-snapshot-rollup';
+
+// Invented figures: a worked example small enough to add up by hand.
+const fact = (
+  chapterId: number,
+  month: string,
+  tallyId: number,
+  figures: Partial<SnapshotFigures>,
+): ChapterMonthFact => ({
+  chapterId,
+  regionId: chapterId === 3 ? 2 : 1,
+  month,
+  tallyId,
+  revision: 1,
+  figures: { ...emptySnapshotFigures(), approvedTallies: 1, ...figures },
+});
+
+const chapters: ChapterInfo[] = [
+  { chapterId: 1, regionId: 1, dueDay: 10, activeFrom: '2024-01-01', activeTo: null },
+  { chapterId: 2, regionId: 1, dueDay: 10, activeFrom: '2026-03-01', activeTo: null },
+  { chapterId: 3, regionId: 2, dueDay: 10, activeFrom: '2025-01-01', activeTo: null },
+];
+const facts = [
+  fact(1, '2026-01', 11, { panelsAccepted: 10, panelsInStock: 5, volunteerHours: 1.1 }),
+  fact(1, '2026-02', 12, { panelsAccepted: 20, panelsInStock: 8, volunteerHours: 2.2 }),
+  fact(2, '2026-03', 21, { panelsAccepted: 1, panelsInStock: 100 }),
+];
+const statuses: TallyStatus[] = [
+  { chapterId: 1, month: '2026-01', firstSubmittedAt: '2026-02-05T09:00:00Z', pending: false },
+  { chapterId: 1, month: '2026-02', firstSubmittedAt: '2026-03-15T09:00:00Z', pending: false },
+  { chapterId: 1, month: '2026-03', firstSubmittedAt: '2026-04-20T09:00:00Z', pending: true },
+  { chapterId: 2, month: '2026-03', firstSubmittedAt: '2026-04-01T09:00:00Z', pending: false },
+];
+const q1 = quarterPeriod('2026-Q1');
+const input = { facts, chapters, statuses, today: '2026-05-20' };
+
+describe('rollUpSnapshots', () => {
+  it("keeps a chapter's stock from its last approved month when a later month is not approved", () => {
+    const [chapter1] = rollUpSnapshots(input, [{ scope: 'chapter', scopeId: 1, period: q1 }]);
+    expect(chapter1.figures).toMatchObject({
+      panelsAccepted: 30,
+      panelsInStock: 8,
+      volunteerHours: 3.3,
+      approvedTallies: 2,
+    });
+    expect(chapter1.pendingTallies).toBe(1);
+    expect(chapter1.compliance).toEqual({ expected: 3, onTime: 1, late: 2, missing: 0, open: 0 });
+    expect(chapter1.sourceRevisions).toEqual([
+      [11, 1],
+      [12, 1],
+    ]);
+  });
+
+  it('adds the chapters of a region, stock included, and expects only active months', () => {
+    const [region1] = rollUpSnapshots(input, [{ scope: 'region', scopeId: 1, period: q1 }]);
+    expect(region1.figures).toMatchObject({ panelsAccepted: 31, panelsInStock: 108 });
+    // Chapter 2 opened in March: one month expected of it.
+    expect(region1.compliance).toEqual({ expected: 4, onTime: 2, late: 2, missing: 0, open: 0 });
+  });
+
+  it('counts missing months of a silent chapter in the network and leaves future months out', () => {
+    const [network] = rollUpSnapshots({ ...input, today: '2026-03-05' }, [
+      { scope: 'network', scopeId: 0, period: q1 },
+    ]);
+    // Chapter 3 never reported: Jan missing (due Feb 10); Feb still due until Mar 10; Mar upcoming.
+    expect(network.compliance.expected).toBe(3 + 3 + 1);
+    expect(network.compliance.missing).toBe(1);
+    expect(network.figures.panelsAccepted).toBe(31);
+  });
+
+  it('gives empty figures to a scope with nothing approved', () => {
+    const [region2] = rollUpSnapshots(input, [{ scope: 'region', scopeId: 2, period: q1 }]);
+    expect(region2.figures).toEqual(emptySnapshotFigures());
+    expect(region2.sourceRevisions).toEqual([]);
+  });
+});
+
+describe('snapshot targets', () => {
+  it('touches chapter, region and network × month, quarter and fiscal year for one change', () => {
+    const targets = targetsOfChapterMonth({ chapterId: 5, regionId: 2 }, '2026-02', 7);
+    expect(targets.map((t) => `${t.scope}:${t.scopeId}:${t.period.key}`).sort()).toEqual(
+      [
+        'chapter:5:2026-02',
+        'chapter:5:2026-Q1',
+        'chapter:5:FY2026',
+        'network:0:2026-02',
+        'network:0:2026-Q1',
+        'network:0:FY2026',
+        'region:2:2026-02',
+        'region:2:2026-Q1',
+        'region:2:FY2026',
+      ].sort(),
+    );
+  });
+
+  it('covers each scope × the periods in which it has tallies, once each', () => {
+    const targets = targetsOfMonths(
+      chapters,
+      [
+        { chapterId: 1, month: '2026-01' },
+        { chapterId: 1, month: '2026-02' },
+        { chapterId: 3, month: '2026-04' },
+      ],
+      1,
+    );
+    const keys = targets.map((t) => `${t.scope}:${t.scopeId}:${t.period.key}`).sort();
+    expect(keys).toEqual(
+      [
+        ...['2026-01', '2026-02', '2026-Q1', 'FY2026'].map((key) => `chapter:1:${key}`),
+        ...['2026-01', '2026-02', '2026-Q1', 'FY2026'].map((key) => `region:1:${key}`),
+        ...['2026-04', '2026-Q2', 'FY2026'].map((key) => `chapter:3:${key}`),
+        ...['2026-04', '2026-Q2', 'FY2026'].map((key) => `region:2:${key}`),
+        ...['2026-01', '2026-02', '2026-04', '2026-Q1', '2026-Q2', 'FY2026'].map(
+          (key) => `network:0:${key}`,
+        ),
+      ].sort(),
+    );
+  });
+});

@@ -1,0 +1,70 @@
+/**
+ * What the snapshot shows beside its figures: which chapter-months were expected, which were
+ * filed when (compliance), and which are pending (filed but not approved, see TALLY_SNAPSHOT).
+ */
+import { monthStartDate, requireIds, type SqlQuery } from './sql';
+import { PENDING_TALLY_CONDITION } from './tally-snapshot';
+
+export interface ChapterFilter {
+  /** Only these chapters; all when absent. An empty list matches none. */
+  chapterIds?: readonly number[];
+}
+
+/** Every chapter with what compliance needs: region, due day and active months. */
+export function chaptersSql(filter: ChapterFilter = {}): SqlQuery {
+  const replacements: Record<string, unknown> = { dayFormat: '%Y-%m-%d' };
+  let where = '';
+  if (filter.chapterIds !== undefined) {
+    const ids = requireIds('chapterIds', filter.chapterIds);
+    where = ids.length === 0 ? 'WHERE 1 = 0' : 'WHERE c.id IN (:chapterIds)';
+    replacements.chapterIds = ids;
+  }
+  return {
+    sql: [
+      'SELECT c.id AS chapter_id, c.region_id, c.reporting_due_day,',
+      '  DATE_FORMAT(c.active_from, :dayFormat) AS active_from,',
+      '  DATE_FORMAT(c.active_to, :dayFormat) AS active_to',
+      'FROM chapters c',
+      where,
+      'ORDER BY c.id',
+    ].join('\n'),
+    replacements,
+  };
+}
+
+export interface TallyStatusFilter extends ChapterFilter {
+  from?: string;
+  to?: string;
+}
+
+/**
+ * One row per monthly tally in any state: chapter_id, month ('YYYY-MM'), first_submitted_at
+ * (for on time / late) and pending (1 when filed but its figures are not approved).
+ */
+export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
+  const where: string[] = [];
+  const replacements: Record<string, unknown> = { monthFormat: '%Y-%m' };
+  if (filter.chapterIds !== undefined) {
+    const ids = requireIds('chapterIds', filter.chapterIds);
+    where.push(ids.length === 0 ? '1 = 0' : 't.chapter_id IN (:chapterIds)');
+    replacements.chapterIds = ids;
+  }
+  if (filter.from !== undefined) {
+    where.push('t.month >= :fromMonth');
+    replacements.fromMonth = monthStartDate('from', filter.from);
+  }
+  if (filter.to !== undefined) {
+    where.push('t.month <= :toMonth');
+    replacements.toMonth = monthStartDate('to', filter.to);
+  }
+  return {
+    sql: [
+      'SELECT t.chapter_id, DATE_FORMAT(t.month, :monthFormat) AS month, t.first_submitted_at,',
+      `  CASE WHEN ${PENDING_TALLY_CONDITION} THEN 1 ELSE 0 END AS pending`,
+      'FROM monthly_tallies t',
+      where.length > 0 ? `WHERE ${where.join(' AND ')}` : '',
+      'ORDER BY t.chapter_id, t.month',
+    ].join('\n'),
+    replacements,
+  };
+}

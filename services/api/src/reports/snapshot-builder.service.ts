@@ -1,0 +1,257 @@
+import { Injectable } from '@nestjs/common';
+import { InjectConnection, InjectModel } from '@nestjs/sequelize';
+import { periodDates, type MonthKey } from '@tallyloom/core';
+import {
+  buildCampaignSnapshot,
+  campaignCreditFromRow,
+  campaignCreditSql,
+  campaignsOfChapterMonthSql,
+  chapterMonthFactsSql,
+  chaptersSql,
+  factFromRow,
+  monthRangeOf,
+  rollUpSnapshots,
+  tallyStatusSql,
+  targetsOfChapterMonth,
+  targetsOfMonths,
+  type BuiltCampaignSnapshot,
+  type BuiltSnapshot,
+  type ChapterInfo,
+  type SqlQuery,
+  type TallyStatus,
+} from '@tallyloom/reports';
+import { QueryTypes, Transaction } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
+import { SettingsService } from '../settings/settings.service';
+import { CampaignSnapshot } from './models/campaign-snapshot.model';
+import { ReportSnapshot } from './models/report-snapshot.model';
+import type { RebuildSummary } from './report-jobs';
+
+// One rebuild at a time across every worker: two jobs touching the same region would otherwise
+// each read before the other's tally committed and the later write could carry stale figures.
+const LOCK_NAME = 'tallyloom:report-snapshots';
+const LOCK_WAIT_SECONDS = 120;
+const WRITE_CHUNK = 500;
+
+type Progress = (percent: number) => Promise<unknown>;
+type Row = Record<string, unknown>;
+
+/** A DATE column as 'YYYY-MM-DD' (the driver may give a Date or text). */
+function isoDate(value: unknown): string | null {
+  if (value instanceof Date) return value.toISOString().slice(0, 10);
+  return typeof value === 'string' ? value.slice(0, 10) : null;
+}
+
+/** A DATETIME read at the connection's UTC time zone, as an ISO timestamp. */
+function isoTimestamp(value: unknown): string | null {
+  if (value instanceof Date) return value.toISOString();
+  if (typeof value !== 'string') return null;
+  return new Date(
+    /[zZ]|[+-]\d\d:?\d\d$/.test(value) ? value : `${value.replace(' ', 'T')}Z`,
+  ).toISOString();
+}
+
+/**
+ * Builds report and campaign snapshots from approved tallies: reads chapter-month facts in one
+ * query, rolls them up with the report definition, and upserts each snapshot (recompute, never
+ * increment) with its as-of time and the revisions it was built from.
+ */
+@Injectable()
+export class SnapshotBuilder {
+  constructor(
+    @InjectConnection() private readonly sequelize: Sequelize,
+    @InjectModel(ReportSnapshot) private readonly snapshots: typeof ReportSnapshot,
+    @InjectModel(CampaignSnapshot) private readonly campaignSnapshots: typeof CampaignSnapshot,
+    private readonly settings: SettingsService,
+  ) {}
+
+  /** The snapshots one chapter-month touches, and the campaigns its receipts credit. */
+  async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
+    return this.locked(async (transaction) => {
+      const chapters = await this.chapters(transaction);
+      const chapter = chapters.find((each) => each.chapterId === chapterId);
+      if (!chapter) throw new Error(`chapter ${chapterId} does not exist`);
+      const { fiscalYearStartMonth } = await this.settings.current();
+      const targets = targetsOfChapterMonth(chapter, month, fiscalYearStartMonth);
+      const range = monthRangeOf(targets)!;
+      const built = await this.build(chapters, targets, range, transaction);
+      const asOf = new Date();
+      await this.writeSnapshots(built, asOf, transaction);
+      const campaignIds = (
+        await this.select(campaignsOfChapterMonthSql(chapterId, month), transaction)
+      ).map((row) => Number(row.campaign_id));
+      const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
+      return { snapshots: built.length, campaigns };
+    });
+  }
+
+  /** Every scope × every period in which it has tallies, and every campaign. */
+  async rebuildAll(progress: Progress = () => Promise.resolve()): Promise<RebuildSummary> {
+    return this.locked(async (transaction) => {
+      const chapters = await this.chapters(transaction);
+      const { fiscalYearStartMonth } = await this.settings.current();
+      const tallied = (
+        await this.select(
+          {
+            sql: 'SELECT chapter_id, DATE_FORMAT(month, :monthFormat) AS month FROM monthly_tallies',
+            replacements: { monthFormat: '%Y-%m' },
+          },
+          transaction,
+        )
+      ).map((row) => ({ chapterId: Number(row.chapter_id), month: String(row.month) }));
+      const targets = targetsOfMonths(chapters, tallied, fiscalYearStartMonth);
+      await progress(10);
+      const built = await this.build(chapters, targets, null, transaction);
+      await progress(40);
+      const asOf = new Date();
+      await this.writeSnapshots(built, asOf, transaction, async (done) =>
+        progress(40 + Math.floor((50 * done) / Math.max(built.length, 1))),
+      );
+      const campaignIds = (
+        await this.select({ sql: 'SELECT id FROM campaigns', replacements: {} }, transaction)
+      ).map((row) => Number(row.id));
+      const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
+      await progress(100);
+      return { snapshots: built.length, campaigns };
+    });
+  }
+
+  private async build(
+    chapters: ChapterInfo[],
+    targets: ReturnType<typeof targetsOfMonths>,
+    range: { from: MonthKey; to: MonthKey } | null,
+    transaction: Transaction,
+  ): Promise<BuiltSnapshot[]> {
+    const filter = range ?? {};
+    const facts = (await this.select(chapterMonthFactsSql(filter), transaction)).map(factFromRow);
+    const statuses: TallyStatus[] = (await this.select(tallyStatusSql(filter), transaction)).map(
+      (row) => ({
+        chapterId: Number(row.chapter_id),
+        month: String(row.month),
+        firstSubmittedAt: isoTimestamp(row.first_submitted_at),
+        pending: Number(row.pending) === 1,
+      }),
+    );
+    const today = new Date().toISOString().slice(0, 10);
+    return rollUpSnapshots({ facts, chapters, statuses, today }, targets);
+  }
+
+  private async writeSnapshots(
+    built: BuiltSnapshot[],
+    asOf: Date,
+    transaction: Transaction,
+    progress: (done: number) => Promise<unknown> = () => Promise.resolve(),
+  ): Promise<void> {
+    for (let start = 0; start < built.length; start += WRITE_CHUNK) {
+      const rows = built.slice(start, start + WRITE_CHUNK).map((snapshot) => {
+        const { fromDate, toDate } = periodDates(snapshot.period);
+        return {
+          scope: snapshot.scope,
+          scopeId: snapshot.scopeId,
+          periodKind: snapshot.period.kind,
+          periodKey: snapshot.period.key,
+          periodFrom: fromDate,
+          periodTo: toDate,
+          figures: snapshot.figures,
+          compliance: snapshot.compliance,
+          pendingTallies: snapshot.pendingTallies,
+          sourceRevisions: snapshot.sourceRevisions,
+          asOf,
+        };
+      });
+      await this.snapshots.bulkCreate(rows, {
+        transaction,
+        updateOnDuplicate: [
+          'periodFrom',
+          'periodTo',
+          'figures',
+          'compliance',
+          'pendingTallies',
+          'sourceRevisions',
+          'asOf',
+        ],
+      });
+      await progress(start + rows.length);
+    }
+  }
+
+  private async rebuildCampaigns(
+    campaignIds: number[],
+    asOf: Date,
+    transaction: Transaction,
+  ): Promise<number> {
+    if (campaignIds.length === 0) return 0;
+    const campaigns = await this.select(
+      {
+        sql: `SELECT id, DATE_FORMAT(starts_on, :dayFormat) AS starts_on,
+                     DATE_FORMAT(ends_on, :dayFormat) AS ends_on
+                FROM campaigns WHERE id IN (:campaignIds)`,
+        replacements: { campaignIds, dayFormat: '%Y-%m-%d' },
+      },
+      transaction,
+    );
+    const credits = (await this.select(campaignCreditSql({ campaignIds }), transaction)).map(
+      campaignCreditFromRow,
+    );
+    const today = new Date().toISOString().slice(0, 10);
+    const built: BuiltCampaignSnapshot[] = campaigns.map((row) =>
+      buildCampaignSnapshot(
+        { id: Number(row.id), startsOn: isoDate(row.starts_on)!, endsOn: isoDate(row.ends_on)! },
+        credits,
+        today,
+      ),
+    );
+    await this.campaignSnapshots.bulkCreate(
+      built.map((snapshot) => ({ ...snapshot, asOf })),
+      { transaction, updateOnDuplicate: ['figures', 'sourceRevisions', 'asOf'] },
+    );
+    return built.length;
+  }
+
+  private async chapters(transaction: Transaction): Promise<ChapterInfo[]> {
+    return (await this.select(chaptersSql(), transaction)).map((row) => ({
+      chapterId: Number(row.chapter_id),
+      regionId: Number(row.region_id),
+      dueDay: Number(row.reporting_due_day),
+      activeFrom: isoDate(row.active_from)!,
+      activeTo: isoDate(row.active_to),
+    }));
+  }
+
+  private select(query: SqlQuery, transaction: Transaction): Promise<Row[]> {
+    return this.sequelize.query<Row>(query.sql, {
+      type: QueryTypes.SELECT,
+      replacements: query.replacements,
+      transaction,
+    });
+  }
+
+  /**
+   * Runs the rebuild in one READ COMMITTED transaction while a named lock is held on a second
+   * connection. The lock is released only after the work has committed, so the next rebuild's
+   * reads see every snapshot and tally committed before it won the lock.
+   */
+  private async locked<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
+    return this.sequelize.transaction(async (lockHolder) => {
+      const [{ got }] = await this.select(
+        {
+          sql: 'SELECT GET_LOCK(:name, :wait) AS got',
+          replacements: { name: LOCK_NAME, wait: LOCK_WAIT_SECONDS },
+        },
+        lockHolder,
+      );
+      if (Number(got) !== 1) throw new Error('another snapshot rebuild held the lock too long');
+      try {
+        return await this.sequelize.transaction(
+          { isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED },
+          work,
+        );
+      } finally {
+        await this.select(
+          { sql: 'SELECT RELEASE_LOCK(:name) AS released', replacements: { name: LOCK_NAME } },
+          lockHolder,
+        );
+      }
+    });
+  }
+}
