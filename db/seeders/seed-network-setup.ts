@@ -110,6 +110,8 @@ const DEMO_SETTINGS: Record<string, number> = {
   panelToleranceIn: 0.5,
   receiptCountCeiling: 10000,
   servedPerBlanketWarnFactor: 3,
+  reminderDaysBeforeDue: 3,
+  reminderDaysAfterDue: 2,
 };
 
 const VOLUNTEER_HOUR_VALUES = [

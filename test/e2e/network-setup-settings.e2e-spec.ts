@@ -14,7 +14,8 @@ const jsonOf = (value: unknown): unknown =>
 /**
  * Settings are shared by the whole test database. The seed stores the defaults, so removing the
  * rows changes nothing another suite can see; the one change made here (the fiscal year's first
- * month) is read by no other feature yet, and is put back after each test.
+ * month) is read by no other feature yet, and is put back after each test. The reminder days are
+ * read by the reminders suite, so they are only ever written with their defaults here.
  */
 describe('network set-up: settings', () => {
   let testApp: TestApp;
@@ -54,6 +55,8 @@ describe('network set-up: settings', () => {
     panelToleranceIn: 0.5,
     receiptCountCeiling: 10_000,
     servedPerBlanketWarnFactor: 3,
+    reminderDaysBeforeDue: 3,
+    reminderDaysAfterDue: 2,
   };
 
   it('answers the defaults when nothing is stored, to every role', async () => {
@@ -69,6 +72,8 @@ describe('network set-up: settings', () => {
       'fiscalYearStartMonth',
       'panelToleranceIn',
       'receiptCountCeiling',
+      'reminderDaysAfterDue',
+      'reminderDaysBeforeDue',
       'servedPerBlanketWarnFactor',
     ]);
     expect((await get().expect(200)).body).toEqual(DEFAULTS);
@@ -115,6 +120,8 @@ describe('network set-up: settings', () => {
   const CEILING = 'receiptCountCeiling must be a whole number from 1 to 1,000,000';
   const FACTOR =
     'servedPerBlanketWarnFactor must be a number from 1 to 100, with at most 1 decimal';
+  const BEFORE = 'reminderDaysBeforeDue must be a whole number from 1 to 28';
+  const AFTER = 'reminderDaysAfterDue must be a whole number from 1 to 28';
   it.each([
     ['fiscalYearStartMonth', { fiscalYearStartMonth: 0 }, MONTH],
     ['fiscalYearStartMonth', { fiscalYearStartMonth: 13 }, MONTH],
@@ -131,6 +138,11 @@ describe('network set-up: settings', () => {
     ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: 2.25 }, FACTOR],
     ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: '3' }, FACTOR],
     ['servedPerBlanketWarnFactor', { servedPerBlanketWarnFactor: undefined }, FACTOR],
+    ['reminderDaysBeforeDue', { reminderDaysBeforeDue: 0 }, BEFORE],
+    ['reminderDaysBeforeDue', { reminderDaysBeforeDue: 29 }, BEFORE],
+    ['reminderDaysBeforeDue', { reminderDaysBeforeDue: 1.5 }, BEFORE],
+    ['reminderDaysAfterDue', { reminderDaysAfterDue: undefined }, AFTER],
+    ['reminderDaysAfterDue', { reminderDaysAfterDue: '2' }, AFTER],
   ])(
     'refuses a bad %s with 400 naming it, and stores nothing (%j)',
     async (field, override, message) => {

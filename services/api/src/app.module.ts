@@ -3,6 +3,7 @@ import { SequelizeModule } from '@nestjs/sequelize';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { existsSync } from 'node:fs';
 import { ChaptersModule } from './chapters/chapters.module';
+import { DashboardsModule } from './dashboards/dashboards.module';
 import { AppLoggerModule } from './common/logging/logger.module';
 import { AppConfig } from './config/app-config';
 import { AppConfigModule } from './config/config.module';
@@ -19,11 +20,32 @@ import { BlanketSizesModule } from './blanket-sizes/blanket-sizes.module';
 import { SettingsModule } from './settings/settings.module';
 import { ReceiptsModule } from './receipts/receipts.module';
 import { TalliesModule } from './tallies/tallies.module';
+import { PROCESSOR_MODULES } from './jobs/processor-modules';
+import { JobsAdminModule } from './jobs/jobs-admin.module';
+import { RemindersModule } from './reminders/reminders.module';
+
+export interface AppModuleOptions {
+  /** `npm run worker`: job processors always on, whatever JOB_PROCESSORS says, and no web app. */
+  worker?: boolean;
+}
+
+function webAppModule(): DynamicModule {
+  return ServeStaticModule.forRootAsync({
+    inject: [AppConfig],
+    useFactory: (config: AppConfig) =>
+      config.serveWeb && existsSync(config.webDistDir)
+        ? [{ rootPath: config.webDistDir, exclude: ['/api/{*path}'] }]
+        : [],
+  });
+}
 
 /** The whole application; built by a function so each instance validates the environment anew. */
 @Module({})
 export class AppModule {
-  static forRoot(): DynamicModule {
+  static forRoot(options: AppModuleOptions = {}): DynamicModule {
+    // Read here, not through AppConfig: imports are fixed before any provider exists. Joi still
+    // validates the value when the config module starts.
+    const processors = options.worker === true || process.env.JOB_PROCESSORS !== 'off';
     return {
       module: AppModule,
       imports: [
@@ -44,13 +66,7 @@ export class AppModule {
         }),
         JobsModule,
         // The built web app, with index.html for every client route; /api stays the API's.
-        ServeStaticModule.forRootAsync({
-          inject: [AppConfig],
-          useFactory: (config: AppConfig) =>
-            config.serveWeb && existsSync(config.webDistDir)
-              ? [{ rootPath: config.webDistDir, exclude: ['/api/{*path}'] }]
-              : [],
-        }),
+        ...(options.worker ? [] : [webAppModule()]),
         AuditModule,
         MailModule,
         AuthModule,
@@ -64,6 +80,10 @@ export class AppModule {
         SettingsModule,
         ReceiptsModule,
         TalliesModule,
+        DashboardsModule,
+        JobsAdminModule,
+        RemindersModule,
+        ...(processors ? PROCESSOR_MODULES : []),
       ],
     };
   }

@@ -107,6 +107,10 @@ export interface NetworkSettings {
   receiptCountCeiling: number;
   /** A tally warns when people served exceed blankets given × this factor. */
   servedPerBlanketWarnFactor: number;
+  /** Chapter leads whose tally is missing get a reminder this many days before the due day. */
+  reminderDaysBeforeDue: number;
+  /** … and another this many days after it. */
+  reminderDaysAfterDue: number;
 }
 
 export interface VolunteerHourValueView {

@@ -99,4 +99,17 @@ export class AppConfig {
   get uploadMaxBytes(): number {
     return Number(this.config.getOrThrow('UPLOAD_MAX_BYTES'));
   }
+
+  /** Whether this process runs the job processors ('off': it only enqueues). */
+  get jobProcessors(): 'in-process' | 'off' {
+    return this.config.getOrThrow('JOB_PROCESSORS');
+  }
+
+  get jobLockMs(): number {
+    return Number(this.config.getOrThrow('JOB_LOCK_MS'));
+  }
+
+  get jobStalledCheckMs(): number {
+    return Number(this.config.getOrThrow('JOB_STALLED_CHECK_MS'));
+  }
 }

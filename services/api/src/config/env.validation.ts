@@ -54,4 +54,10 @@ export const envValidationSchema = Joi.object({
     .min(1)
     .max(100 * 1024 * 1024)
     .default(10 * 1024 * 1024),
+  // 'in-process': this process runs every job processor; 'off': it only enqueues (`npm run worker` runs them).
+  JOB_PROCESSORS: Joi.string().valid('in-process', 'off').default('in-process'),
+  // How long a worker's hold on a job lasts before another worker takes the job over (Bull's lock).
+  JOB_LOCK_MS: Joi.number().integer().min(1000).max(600_000).default(30_000),
+  // How often each worker looks for jobs whose holder died.
+  JOB_STALLED_CHECK_MS: Joi.number().integer().min(500).max(600_000).default(30_000),
 });

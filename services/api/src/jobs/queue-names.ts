@@ -2,6 +2,8 @@
 export enum QueueName {
   /** Rebuilds report snapshots after tallies change. */
   Reports = 'reports',
+  /** E-mails chapter leads whose monthly tally is missing near its due day. */
+  Reminders = 'reminders',
 }
 
 export const ALL_QUEUES: QueueName[] = Object.values(QueueName);

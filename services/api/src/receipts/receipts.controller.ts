@@ -19,13 +19,13 @@ import {
 } from '@nestjs/swagger';
 import { Allow } from '../common/access/access.decorators';
 import { Ctx, type SignedInContext } from '../common/context/request-context';
+import { StaleVersionFilter } from '../common/filters/stale-version.filter';
 import { IdParam } from '../common/pipes/id-param';
 import { ReceiptInputDto, UpdateReceiptDto } from './dto/receipt-input.dto';
 import { ListReceiptsQuery } from './dto/list-receipts.query';
 import { ReceiptDetailDto, ReceiptHistoryEntryDto, ReceiptPageDto } from './dto/receipt-view.dto';
 import { ReceiptInScopeGuard } from './receipt-in-scope.guard';
 import { ReceiptsService } from './receipts.service';
-import { StaleReceiptFilter } from './stale-receipt.filter';
 
 @ApiTags('receipts')
 @ApiBearerAuth()
@@ -63,7 +63,7 @@ export class ReceiptsController {
   @Patch(':id')
   @Allow('receipts.write')
   @UseGuards(ReceiptInScopeGuard)
-  @UseFilters(StaleReceiptFilter)
+  @UseFilters(StaleVersionFilter)
   @ApiOkResponse({ type: ReceiptDetailDto })
   @ApiConflictResponse({ description: 'A newer version exists; the body carries it as `current`' })
   update(

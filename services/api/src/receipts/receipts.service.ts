@@ -26,7 +26,7 @@ import { ReceiptReferenceData } from './receipt-reference-data';
 import { auditableReceipt, toReceiptView, toScanView } from './receipt.mappers';
 import { latestToday, receiptProblems, receiptValues, type ResolvedInput } from './receipt-rules';
 import { SCOPE_CHAPTER, receiptScope } from './receipt-scope';
-import { StaleReceiptException } from './stale-receipt.filter';
+import { StaleReceiptException } from './stale-receipt.exception';
 
 export const RECEIPT_ENTITY = 'parcel_receipt';
 

@@ -9,6 +9,8 @@ describe('settingsFromRows', () => {
       panelToleranceIn: 0.5,
       receiptCountCeiling: 10_000,
       servedPerBlanketWarnFactor: 3,
+      reminderDaysBeforeDue: 3,
+      reminderDaysAfterDue: 2,
     });
   });
 
@@ -23,6 +25,8 @@ describe('settingsFromRows', () => {
       panelToleranceIn: 0.75,
       receiptCountCeiling: 10_000,
       servedPerBlanketWarnFactor: 3,
+      reminderDaysBeforeDue: 3,
+      reminderDaysAfterDue: 2,
     });
   });
 

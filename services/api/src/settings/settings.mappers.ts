@@ -10,6 +10,9 @@ export const DEFAULT_SETTINGS: Readonly<NetworkSettings> = {
   receiptCountCeiling: 10_000,
   // Our own default, not a published figure: a blanket may serve a family, rarely more.
   servedPerBlanketWarnFactor: 3,
+  // Our own defaults: early enough to act on, late enough not to nag.
+  reminderDaysBeforeDue: 3,
+  reminderDaysAfterDue: 2,
 };
 
 export const SETTING_KEYS = Object.keys(DEFAULT_SETTINGS) as Array<keyof NetworkSettings>;

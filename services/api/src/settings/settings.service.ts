@@ -32,6 +32,8 @@ export class SettingsService {
         panelToleranceIn: body.panelToleranceIn,
         receiptCountCeiling: body.receiptCountCeiling,
         servedPerBlanketWarnFactor: body.servedPerBlanketWarnFactor,
+        reminderDaysBeforeDue: body.reminderDaysBeforeDue,
+        reminderDaysAfterDue: body.reminderDaysAfterDue,
       };
       const changed = SETTING_KEYS.filter((key) => before[key] !== after[key]);
       if (changed.length === 0) return after;

@@ -24,6 +24,7 @@ import {
 import type { Policy } from '@tallyloom/core';
 import { Allow } from '../common/access/access.decorators';
 import { Ctx, type SignedInContext } from '../common/context/request-context';
+import { StaleVersionFilter } from '../common/filters/stale-version.filter';
 import { IdParam } from '../common/pipes/id-param';
 import { ListTalliesQuery, TallyCalendarQuery } from './dto/list-tallies.query';
 import {
@@ -40,7 +41,6 @@ import {
   TallyPageDto,
   TallyRevisionViewDto,
 } from './dto/tally-view.dto';
-import { StaleTallyFilter } from './stale-tally.filter';
 import { TalliesService } from './tallies.service';
 import { TallyInScopeGuard } from './tally-in-scope.guard';
 import { TallyReader } from './tally-reader.service';
@@ -54,7 +54,7 @@ const TallyWrite = (policy: Policy) =>
   applyDecorators(
     Allow(policy),
     UseGuards(TallyInScopeGuard),
-    UseFilters(StaleTallyFilter),
+    UseFilters(StaleVersionFilter),
     HttpCode(HttpStatus.OK),
     ApiOkResponse({ type: TallyDetailDto }),
     ApiConflictResponse({

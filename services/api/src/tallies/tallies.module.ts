@@ -4,6 +4,7 @@ import { AgencyChapter } from '../agencies/models/agency-chapter.model';
 import { PartnerAgency } from '../agencies/models/partner-agency.model';
 import { BlanketSize } from '../blanket-sizes/models/blanket-size.model';
 import { Chapter } from '../chapters/models/chapter.model';
+import { ReportsModule } from '../reports/reports.module';
 import { SettingsModule } from '../settings/settings.module';
 import { User } from '../users/models/user.model';
 import { MonthlyTally } from './models/monthly-tally.model';
@@ -38,6 +39,8 @@ import { TallyRevisionsRepository } from './tally-revisions.repository';
       User,
     ]),
     SettingsModule,
+    // The snapshot queue: an approval asks for the rebuild of what it touches.
+    ReportsModule,
   ],
   controllers: [TalliesController],
   providers: [

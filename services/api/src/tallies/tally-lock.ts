@@ -6,7 +6,7 @@ import type { Sequelize } from 'sequelize-typescript';
 import type { SignedInContext } from '../common/context/request-context';
 import { MonthlyTally } from './models/monthly-tally.model';
 import { TallyRevision } from './models/tally-revision.model';
-import { StaleTallyException } from './stale-tally.filter';
+import { StaleTallyException } from './stale-tally.exception';
 import { tallyNotFound } from './tally-in-scope.guard';
 import { TallyReader } from './tally-reader.service';
 import { TallyRevisionsRepository } from './tally-revisions.repository';

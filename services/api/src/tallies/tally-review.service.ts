@@ -8,6 +8,7 @@ import {
 } from '@tallyloom/core';
 import type { Transaction } from 'sequelize';
 import { AuditService } from '../audit/audit.service';
+import { SnapshotQueue } from '../reports/snapshot-queue.service';
 import type { SignedInContext } from '../common/context/request-context';
 import { invalidField } from '../common/validation/field-errors';
 import type {
@@ -38,6 +39,7 @@ export class TallyReviewService {
     private readonly lock: TallyLock,
     private readonly reader: TallyReader,
     private readonly audit: AuditService,
+    private readonly snapshots: SnapshotQueue,
   ) {}
 
   /**
@@ -129,11 +131,13 @@ export class TallyReviewService {
    */
   async approve(context: SignedInContext, id: number, body: ApproveTallyDto): Promise<TallyDetail> {
     const comment = body.comment ?? null;
+    let approved: { chapterId: number; month: string } | null = null;
     await this.lock.write(context, id, {
       version: body.version,
       action: 'approve',
       apply: async ({ tally, current, transaction }) => {
         if (current.submittedBy === context.actor.id) throw new ForbiddenException(OWN_APPROVAL);
+        approved = { chapterId: tally.chapterId, month: tally.month.slice(0, 7) };
         const superseded = tally.approvedRevision;
         if (superseded !== null && superseded !== current.revision) {
           await this.revisionRows.update(
@@ -165,6 +169,8 @@ export class TallyReviewService {
         return { state: 'approved', approvedRevision: current.revision };
       },
     });
+    // Only now has the approval committed, so the rebuild reads it.
+    if (approved) this.snapshots.afterApproval(approved);
     return this.reader.detail(context.actor, id);
   }
 

@@ -1,6 +1,5 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import type {
-  ApiErrorBody,
   ParcelReceiptDetail,
   ParcelReceiptView,
   ReceiptPage,
@@ -113,9 +112,4 @@ export class ReceiptHistoryEntryDto {
   @ApiProperty({ type: String, nullable: true }) actorEmail: string | null;
   @ApiPropertyOptional({ type: Object, nullable: true }) before: Record<string, unknown> | null;
   @ApiPropertyOptional({ type: Object, nullable: true }) after: Record<string, unknown> | null;
-}
-
-/** The body of a 409 on a stale version: the error, and the receipt as it is now. */
-export interface ReceiptConflictBody extends ApiErrorBody {
-  current: ParcelReceiptDetail;
 }

@@ -47,4 +47,17 @@ export class NetworkSettingsDto implements NetworkSettings {
     { message: SERVED_FACTOR },
   )
   servedPerBlanketWarnFactor: number;
+
+  @WholeNumberField(1, 28, {
+    example: 3,
+    description:
+      'Days before the due day that leads of a chapter with a missing tally are reminded',
+  })
+  reminderDaysBeforeDue: number;
+
+  @WholeNumberField(1, 28, {
+    example: 2,
+    description: 'Days after the due day that leads of a chapter with a missing tally are reminded',
+  })
+  reminderDaysAfterDue: number;
 }

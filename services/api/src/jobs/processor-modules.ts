@@ -1,0 +1,10 @@
+import type { Type } from '@nestjs/common';
+import { RemindersJobsModule } from '../reminders/reminders-jobs.module';
+import { ReportsJobsModule } from '../reports/reports-jobs.module';
+
+/**
+ * Every module that holds a Bull processor, in one list: the API imports them unless
+ * JOB_PROCESSORS=off, and `npm run worker` always does. Producers live in the feature modules,
+ * so enqueuing works in every process.
+ */
+export const PROCESSOR_MODULES: Type[] = [ReportsJobsModule, RemindersJobsModule];
