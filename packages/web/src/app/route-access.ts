@@ -31,6 +31,12 @@ export const routeAccess = {
   tallyReview: { name: 'Review tallies', policy: 'tallies.review' },
   tallyReviewItem: { name: 'Review a tally', policy: 'tallies.review' },
   setup: { name: 'Network set-up', policy: 'network.manage' },
+  dashboard: { name: 'Dashboard', policy: 'reports.read' },
+  dashboardRegion: { name: 'Region dashboard', policy: 'reports.read' },
+  dashboardChapter: { name: 'Chapter dashboard', policy: 'reports.read' },
+  campaigns: { name: 'Campaigns', policy: 'reports.read' },
+  campaign: { name: 'Campaign progress', policy: 'reports.read' },
+  jobs: { name: 'Jobs', policy: 'jobs.manage' },
   account: { name: 'My account', policy: null },
 } as const satisfies Record<string, RouteAccess>;
 

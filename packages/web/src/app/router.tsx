@@ -60,6 +60,14 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               element: <AcceptInvitationRoute />,
               errorElement: pageError,
             },
+            {
+              // The shareable campaign page: no session needed, counts only.
+              path: paths.publicProgress.path,
+              lazy: async () => ({
+                Component: (await import('./routes/public-progress')).PublicProgressRoute,
+              }),
+              errorElement: pageError,
+            },
           ],
         },
         {
@@ -243,6 +251,64 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
                 currentUrl.pathname !== nextUrl.pathname,
               errorElement: pageError,
               handle: { access: routeAccess.tallyRevisions } satisfies AccessHandle,
+            },
+            {
+              path: paths.dashboard.path,
+              // The dashboards carry ECharts: it loads with them, not with the app.
+              lazy: async () => ({
+                Component: (await import('./routes/dashboard')).DashboardRoute,
+              }),
+              loader: requireAccess(routeAccess.dashboard),
+              // The period changes only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.dashboard } satisfies AccessHandle,
+            },
+            {
+              path: paths.dashboardRegion.path,
+              lazy: async () => ({
+                Component: (await import('./routes/dashboard-region')).DashboardRegionRoute,
+              }),
+              loader: requireAccess(routeAccess.dashboardRegion),
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.dashboardRegion } satisfies AccessHandle,
+            },
+            {
+              path: paths.dashboardChapter.path,
+              lazy: async () => ({
+                Component: (await import('./routes/dashboard-chapter')).DashboardChapterRoute,
+              }),
+              loader: requireAccess(routeAccess.dashboardChapter),
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.dashboardChapter } satisfies AccessHandle,
+            },
+            {
+              path: paths.campaigns.path,
+              lazy: async () => ({
+                Component: (await import('./routes/campaigns')).CampaignsRoute,
+              }),
+              loader: requireAccess(routeAccess.campaigns),
+              errorElement: pageError,
+              handle: { access: routeAccess.campaigns } satisfies AccessHandle,
+            },
+            {
+              path: paths.campaign.path,
+              lazy: async () => ({ Component: (await import('./routes/campaign')).CampaignRoute }),
+              loader: requireAccess(routeAccess.campaign),
+              errorElement: pageError,
+              handle: { access: routeAccess.campaign } satisfies AccessHandle,
+            },
+            {
+              path: paths.jobs.path,
+              lazy: async () => ({ Component: (await import('./routes/jobs')).JobsRoute }),
+              loader: requireAccess(routeAccess.jobs),
+              errorElement: pageError,
+              handle: { access: routeAccess.jobs } satisfies AccessHandle,
             },
             {
               path: paths.account.path,

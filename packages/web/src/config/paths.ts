@@ -71,6 +71,35 @@ export const paths = {
     path: '/review/:id',
     getHref: (id: number) => `/review/${id}`,
   },
+  dashboard: {
+    path: '/dashboard',
+    /** `search`: the period, as the dashboard keeps it in its URL. */
+    getHref: (search = '') => `/dashboard${search}`,
+  },
+  dashboardRegion: {
+    path: '/dashboard/regions/:id',
+    getHref: (id: number, search = '') => `/dashboard/regions/${id}${search}`,
+  },
+  dashboardChapter: {
+    path: '/dashboard/chapters/:id',
+    getHref: (id: number, search = '') => `/dashboard/chapters/${id}${search}`,
+  },
+  campaigns: {
+    path: '/dashboard/campaigns',
+    getHref: () => '/dashboard/campaigns',
+  },
+  campaign: {
+    path: '/dashboard/campaigns/:id',
+    getHref: (id: number) => `/dashboard/campaigns/${id}`,
+  },
+  publicProgress: {
+    path: '/progress/:code',
+    getHref: (code: string) => `/progress/${encodeURIComponent(code)}`,
+  },
+  jobs: {
+    path: '/jobs',
+    getHref: () => '/jobs',
+  },
   setup: {
     path: '/setup',
     getHref: () => '/setup',

@@ -8,6 +8,14 @@ export function formatCount(value: number): string {
   return countFormat.format(value);
 }
 
+// Volunteer hours and weights carry up to two decimals; same locale as the counts.
+const figureFormat = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2 });
+
+/** 1234 → "1,234"; 12.5 → "12.5". */
+export function formatFigure(value: number): string {
+  return figureFormat.format(value);
+}
+
 /** "2026-03-01" → "Mar 2026". Parsed as a local date so the month never slips across time zones. */
 export function formatMonthYear(isoDate: string): string {
   const date = parseISO(isoDate);

@@ -67,6 +67,8 @@ export const demoSettings: NetworkSettings = {
   panelToleranceIn: 0.5,
   receiptCountCeiling: 5_000,
   servedPerBlanketWarnFactor: 3,
+  reminderDaysBeforeDue: 3,
+  reminderDaysAfterDue: 2,
 };
 
 export const demoScans: ScanView[] = [

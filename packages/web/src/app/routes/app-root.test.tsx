@@ -68,10 +68,13 @@ describe('navigation by role', () => {
   it('gives a network admin every page, People, Network set-up and the dev outbox included', async () => {
     expect(await navigationLinks(demoPeople.admin)).toEqual([
       'Network',
+      'Dashboard',
+      'Campaigns',
       'Parcels',
       'Monthly tallies',
       'Review',
       'System status',
+      'Jobs',
       'People',
       'Network set-up',
       'Dev outbox',
@@ -81,10 +84,13 @@ describe('navigation by role', () => {
   it('gives national staff the network, parcels and system status, but not People or set-up', async () => {
     expect(await navigationLinks(demoPeople.staff)).toEqual([
       'Network',
+      'Dashboard',
+      'Campaigns',
       'Parcels',
       'Monthly tallies',
       'Review',
       'System status',
+      'Jobs',
     ]);
   });
 
@@ -92,6 +98,8 @@ describe('navigation by role', () => {
     expect(await navigationLinks(demoPeople.chapterLead)).toEqual([
       'Monthly tallies',
       'Network',
+      'Dashboard',
+      'Campaigns',
       'Parcels',
     ]);
   });
@@ -99,6 +107,8 @@ describe('navigation by role', () => {
   it('gives a regional coordinator the parcels of their region to read', async () => {
     expect(await navigationLinks(demoPeople.coordinator)).toEqual([
       'Network',
+      'Dashboard',
+      'Campaigns',
       'Parcels',
       'Monthly tallies',
       'Review',
@@ -106,7 +116,11 @@ describe('navigation by role', () => {
   });
 
   it('does not show System status, parcels or Network set-up to a grant writer', async () => {
-    expect(await navigationLinks(demoPeople.grantWriter)).toEqual(['Network']);
+    expect(await navigationLinks(demoPeople.grantWriter)).toEqual([
+      'Network',
+      'Dashboard',
+      'Campaigns',
+    ]);
   });
 
   it('shows Network set-up to network admins only', async () => {

@@ -1,11 +1,14 @@
 import {
   BoxMultiple20Regular,
   CalendarLtr20Regular,
+  ChartMultiple20Regular,
   ClipboardTaskListLtr20Regular,
+  DataUsage20Regular,
   Home20Regular,
   MailInbox20Regular,
   People20Regular,
   Pulse20Regular,
+  TaskListSquareLtr20Regular,
   WrenchSettings20Regular,
 } from '@fluentui/react-icons';
 import { can, ROLE_LABELS, rolesFor, type Role, type SessionUser } from '@tallyloom/core';
@@ -36,6 +39,19 @@ const navItems: NavEntry[] = [
     access: routeAccess.network,
   },
   {
+    label: routeAccess.dashboard.name,
+    to: paths.dashboard.getHref(),
+    icon: DataUsage20Regular,
+    // Region and chapter dashboards sit under it; the campaigns have their own entry.
+    access: routeAccess.dashboard,
+  },
+  {
+    label: routeAccess.campaigns.name,
+    to: paths.campaigns.getHref(),
+    icon: ChartMultiple20Regular,
+    access: routeAccess.campaigns,
+  },
+  {
     label: routeAccess.receipts.name,
     to: paths.receipts.getHref(),
     icon: BoxMultiple20Regular,
@@ -60,6 +76,12 @@ const navItems: NavEntry[] = [
     to: paths.status.getHref(),
     icon: Pulse20Regular,
     access: routeAccess.status,
+  },
+  {
+    label: routeAccess.jobs.name,
+    to: paths.jobs.getHref(),
+    icon: TaskListSquareLtr20Regular,
+    access: routeAccess.jobs,
   },
   {
     label: routeAccess.people.name,

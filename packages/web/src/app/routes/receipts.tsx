@@ -1,7 +1,6 @@
 import { Add20Regular, TableArrowUp20Regular } from '@fluentui/react-icons';
 import { can } from '@tallyloom/core';
-import { useEffect, useMemo, useRef, useState } from 'react';
-import { useSearchParams } from 'react-router-dom';
+import { useMemo } from 'react';
 import { LinkButton } from '@/components/ui/link-button';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -14,6 +13,7 @@ import {
   ReceiptsList,
   type ReceiptsQuery,
 } from '@/features/receipts/components/receipts-list';
+import { useQueryInUrl } from '@/hooks/use-query-in-url';
 import { useSessionUser } from '@/lib/session/use-session';
 
 const isoDate = /^\d{4}-\d{2}-\d{2}$/;
@@ -69,38 +69,9 @@ function toSearchParams(query: ReceiptsQuery): URLSearchParams {
   return params;
 }
 
-/**
- * The list's query, kept in the URL. A navigation settles a moment after it is asked for, so
- * the query last asked for is shown until the URL catches up: a second filter changed quickly
- * after the first then builds on it instead of on the URL of a moment ago. A URL change from
- * elsewhere (back button, the navigation link) wins.
- */
-function useQueryInUrl(): [ReceiptsQuery, (next: ReceiptsQuery) => void] {
-  const [searchParams, setSearchParams] = useSearchParams();
-  const search = searchParams.toString();
-  const [pending, setPending] = useState<ReceiptsQuery | null>(null);
-  const asked = useRef<string[]>([]);
-
-  useEffect(() => {
-    const index = asked.current.indexOf(search);
-    if (index === -1 || index === asked.current.length - 1) {
-      asked.current = [];
-      setPending(null);
-    }
-  }, [search]);
-
-  const change = (next: ReceiptsQuery) => {
-    const nextSearch = toSearchParams(next);
-    asked.current.push(nextSearch.toString());
-    setPending(next);
-    setSearchParams(nextSearch, { replace: true });
-  };
-  return [pending ?? parseQuery(searchParams), change];
-}
-
 /** Parcels received across the person's scope. Loaded on demand. */
 export function ReceiptsRoute() {
-  const [query, changeQuery] = useQueryInUrl();
+  const [query, changeQuery] = useQueryInUrl(parseQuery, toSearchParams);
   const user = useSessionUser();
   const regions = useRegions();
   const chapters = useChapters();

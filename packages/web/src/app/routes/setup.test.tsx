@@ -51,6 +51,8 @@ const storedSettings: NetworkSettings = {
   panelToleranceIn: 0.5,
   receiptCountCeiling: 10000,
   servedPerBlanketWarnFactor: 3,
+  reminderDaysBeforeDue: 3,
+  reminderDaysAfterDue: 2,
 };
 
 function mockSetupApi(extra: Handlers = {}) {
@@ -367,6 +369,14 @@ describe('settings', () => {
     const factor = screen.getByLabelText(/^People served per blanket/);
     await user.clear(factor);
     await user.type(factor, '2.5');
+    const remindBefore = screen.getByLabelText(/^Remind before the due day/);
+    await user.clear(remindBefore);
+    await user.type(remindBefore, '0');
+    await user.click(screen.getByRole('button', { name: 'Save settings' }));
+    expect(screen.getByText('Enter a whole number of days from 1 to 28.')).toBeInTheDocument();
+    expect(seenRequests(fetchMock, '/api/settings').some((r) => r.method === 'PUT')).toBe(false);
+    await user.clear(remindBefore);
+    await user.type(remindBefore, '5');
     await user.click(screen.getByRole('button', { name: 'Save settings' }));
 
     expect(await screen.findByText('Settings saved.')).toBeInTheDocument();
@@ -376,6 +386,8 @@ describe('settings', () => {
       panelToleranceIn: 0.25,
       receiptCountCeiling: 5000,
       servedPerBlanketWarnFactor: 2.5,
+      reminderDaysBeforeDue: 5,
+      reminderDaysAfterDue: 2,
     });
   });
 

@@ -20,6 +20,8 @@ const settingsFields: SettingsField[] = [
   'panelToleranceIn',
   'receiptCountCeiling',
   'servedPerBlanketWarnFactor',
+  'reminderDaysBeforeDue',
+  'reminderDaysAfterDue',
 ];
 
 const headingId = 'settings-heading';
@@ -27,6 +29,7 @@ const headingId = 'settings-heading';
 const TOLERANCE = { min: 0, max: 3, decimals: 2 };
 const MAX_CEILING = 1_000_000;
 const SERVED_FACTOR = { min: 1, max: 100, decimals: 1 };
+const MAX_REMINDER_DAYS = 28;
 
 /** 1 → "January" … 12 → "December". */
 const MONTHS = Array.from({ length: 12 }, (_, index) => ({
@@ -51,6 +54,8 @@ interface SettingsDraft {
   panelToleranceIn: string;
   receiptCountCeiling: string;
   servedPerBlanketWarnFactor: string;
+  reminderDaysBeforeDue: string;
+  reminderDaysAfterDue: string;
 }
 
 function settingsProblems(draft: SettingsDraft): Partial<Record<SettingsField, string>> {
@@ -63,6 +68,10 @@ function settingsProblems(draft: SettingsDraft): Partial<Record<SettingsField, s
     problems.receiptCountCeiling = 'Enter a whole number from 1 to 1,000,000.';
   if (parseDecimal(draft.servedPerBlanketWarnFactor, SERVED_FACTOR) === undefined)
     problems.servedPerBlanketWarnFactor = 'Enter a number from 1 to 100, with at most 1 decimal.';
+  if (parseWholeNumber(draft.reminderDaysBeforeDue, 1, MAX_REMINDER_DAYS) === undefined)
+    problems.reminderDaysBeforeDue = 'Enter a whole number of days from 1 to 28.';
+  if (parseWholeNumber(draft.reminderDaysAfterDue, 1, MAX_REMINDER_DAYS) === undefined)
+    problems.reminderDaysAfterDue = 'Enter a whole number of days from 1 to 28.';
   return problems;
 }
 
@@ -83,6 +92,8 @@ function SettingsFormFields({ settings }: { settings: NetworkSettings }) {
     panelToleranceIn: String(settings.panelToleranceIn),
     receiptCountCeiling: String(settings.receiptCountCeiling),
     servedPerBlanketWarnFactor: String(settings.servedPerBlanketWarnFactor),
+    reminderDaysBeforeDue: String(settings.reminderDaysBeforeDue),
+    reminderDaysAfterDue: String(settings.reminderDaysAfterDue),
   });
   const [submitted, setSubmitted] = useState(false);
   const change = (changes: Partial<SettingsDraft>) => setDraft({ ...draft, ...changes });
@@ -103,6 +114,8 @@ function SettingsFormFields({ settings }: { settings: NetworkSettings }) {
         panelToleranceIn: Number(draft.panelToleranceIn.trim()),
         receiptCountCeiling: Number(draft.receiptCountCeiling.trim()),
         servedPerBlanketWarnFactor: Number(draft.servedPerBlanketWarnFactor.trim()),
+        reminderDaysBeforeDue: Number(draft.reminderDaysBeforeDue.trim()),
+        reminderDaysAfterDue: Number(draft.reminderDaysAfterDue.trim()),
       },
       { onSuccess: () => notify('Settings saved.') },
     );
@@ -168,6 +181,36 @@ function SettingsFormFields({ settings }: { settings: NetworkSettings }) {
           autoComplete="off"
           value={draft.servedPerBlanketWarnFactor}
           onChange={(_event, data) => change({ servedPerBlanketWarnFactor: data.value })}
+        />
+      </Field>
+      <Field
+        label="Remind before the due day (days)"
+        hint="Chapter leads whose monthly tally is not yet submitted get an e-mail this many days before it is due."
+        validationMessage={shown.reminderDaysBeforeDue}
+      >
+        <Input
+          name="reminderDaysBeforeDue"
+          type="number"
+          min={1}
+          max={MAX_REMINDER_DAYS}
+          step={1}
+          value={draft.reminderDaysBeforeDue}
+          onChange={(_event, data) => change({ reminderDaysBeforeDue: data.value })}
+        />
+      </Field>
+      <Field
+        label="Remind after the due day (days)"
+        hint="… and another this many days after, if it is still missing."
+        validationMessage={shown.reminderDaysAfterDue}
+      >
+        <Input
+          name="reminderDaysAfterDue"
+          type="number"
+          min={1}
+          max={MAX_REMINDER_DAYS}
+          step={1}
+          value={draft.reminderDaysAfterDue}
+          onChange={(_event, data) => change({ reminderDaysAfterDue: data.value })}
         />
       </Field>
       <div className={styles.actions}>

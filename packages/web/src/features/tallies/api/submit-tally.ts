@@ -5,7 +5,7 @@ import { refreshAfterTallyWrite } from './invalidate-tally';
 
 export interface SubmitTallyInput extends SubmitTallyRequest {
   id: number;
-  /** Made once per submit attempt; the server turns a repeat of the same key into one submission. */
+  /** The same key sent again answers as the first submission did: one submission, not two. */
   idempotencyKey?: string;
 }
 

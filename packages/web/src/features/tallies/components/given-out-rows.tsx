@@ -8,9 +8,9 @@ import {
 } from '@fluentui/react-components';
 import { Add20Regular, Delete20Regular } from '@fluentui/react-icons';
 import { useFieldArray, useWatch, type Control } from 'react-hook-form';
+import { isBabySize, SAFE_SLEEP_CAUTION } from '@/components/tallies/safe-sleep';
 import { CountField } from './count-field';
 import { SelectField } from './select-field';
-import { isBabySize, SAFE_SLEEP_CAUTION } from './tally-labels';
 import {
   chosenProblem,
   emptyGivenRow,

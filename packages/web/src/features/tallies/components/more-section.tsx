@@ -1,6 +1,6 @@
 import { Text } from '@fluentui/react-components';
-import { KG_PER_POUND, kgToPounds, poundsToKg } from '@tallyloom/core';
 import { useWatch, type Control } from 'react-hook-form';
+import { yarnInWords } from '@/components/tallies/yarn';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { CountField } from './count-field';
 import { useSectionStyles } from './form-styles';
@@ -8,18 +8,10 @@ import { SelectField } from './select-field';
 import { TextAreaField } from './text-area-field';
 import { hoursProblem, yarnProblem, type TallyForm } from './tally-form-model';
 
-// Enough places for the exact pound (0.45359237 kg) times a weight with 3 decimals.
-const exact = new Intl.NumberFormat('en-US', { maximumFractionDigits: 11 });
-const rounded = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2 });
-
-/** "12 lb = 5.44310844 kg", exact (1 lb is 0.45359237 kg by definition); kg → lb is rounded. */
-export function yarnConversion(typed: string, unit: 'kg' | 'lb'): string | undefined {
+/** The typed weight in both units, or undefined while it is empty or not a weight. */
+function yarnConversion(typed: string, unit: 'kg' | 'lb'): string | undefined {
   if (typed.trim() === '' || yarnProblem(typed)) return undefined;
-  const value = Number(typed);
-  if (unit === 'lb') {
-    return `${exact.format(value)} lb = ${exact.format(poundsToKg(value))} kg (1 lb = ${exact.format(KG_PER_POUND)} kg exactly)`;
-  }
-  return `${exact.format(value)} kg ≈ ${rounded.format(kgToPounds(value))} lb`;
+  return yarnInWords(Number(typed), unit);
 }
 
 /** Volunteer hours, yarn donated and notes. */

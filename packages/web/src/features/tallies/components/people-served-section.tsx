@@ -8,25 +8,38 @@ import { useSectionStyles } from './form-styles';
 import { wholeNumberProblem, type TallyForm } from './tally-form-model';
 
 const useStyles = makeStyles({
+  // Only a narrow window scrolls: from 560 px up the table shares out its column's width.
   scroller: { overflowX: 'auto' },
-  table: { borderCollapse: 'collapse' },
+  table: {
+    borderCollapse: 'collapse',
+    tableLayout: 'fixed',
+    width: '100%',
+    minWidth: '560px',
+  },
+  agencyColumn: { width: '24%' },
+  totalColumn: { width: '10%' },
+  // Header cells inherit this: a wrapped group name lines up with the one-line ones.
+  header: { verticalAlign: 'bottom' },
   head: {
     textAlign: 'end',
     fontWeight: tokens.fontWeightSemibold,
-    padding: `${tokens.spacingVerticalXS} ${tokens.spacingHorizontalS}`,
-    whiteSpace: 'nowrap',
+    padding: `${tokens.spacingVerticalXS} ${tokens.spacingHorizontalXS}`,
+    // Long group names ("Disaster-affected") wrap instead of widening the column.
+    overflowWrap: 'break-word',
   },
   rowHead: {
     textAlign: 'start',
     fontWeight: tokens.fontWeightRegular,
     padding: `${tokens.spacingVerticalXS} ${tokens.spacingHorizontalS}`,
-    minWidth: '180px',
+    overflowWrap: 'break-word',
   },
   cell: { padding: `${tokens.spacingVerticalXXS} ${tokens.spacingHorizontalXS}` },
-  box: { width: '88px' },
+  // The box takes its cell's width, whatever the column gets.
+  box: { width: '100%', minWidth: 0 },
   total: {
     textAlign: 'end',
     fontVariantNumeric: 'tabular-nums',
+    whiteSpace: 'nowrap',
     padding: `${tokens.spacingVerticalXS} ${tokens.spacingHorizontalS}`,
   },
 });
@@ -61,7 +74,14 @@ export function PeopleServedSection({ control, agencies }: PeopleServedSectionPr
       ) : (
         <div className={styles.scroller}>
           <table className={styles.table} aria-labelledby="tally-people">
-            <thead>
+            <colgroup>
+              <col className={styles.agencyColumn} />
+              {PEOPLE_GROUPS.map((group) => (
+                <col key={group} />
+              ))}
+              <col className={styles.totalColumn} />
+            </colgroup>
+            <thead className={styles.header}>
               <tr>
                 <th className={styles.rowHead} scope="col">
                   Partner agency

@@ -26,7 +26,7 @@ import { paths } from '@/config/paths';
 import { useTallyCalendar } from '../api/get-tally-calendar';
 import { StartTallyButton } from './start-tally-button';
 import { reportingText } from './tally-labels';
-import { TallyStateBadge } from './tally-state-badge';
+import { TallyStateBadge } from '@/components/tallies/tally-state-badge';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL },

@@ -2,7 +2,7 @@ import type { TallyDetail } from '@tallyloom/core';
 import { screen, waitFor, within } from '@testing-library/react';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { paths } from '@/config/paths';
-import { demoPeople } from '@/testing/fixtures';
+import { apiErrorBody, demoPeople } from '@/testing/fixtures';
 import { jsonResponse, mockApi, seenRequests } from '@/testing/mock-api';
 import { renderApp } from '@/testing/render-app';
 import { draftTally, marchValues } from '@/testing/tally-fixtures';
@@ -182,6 +182,27 @@ describe('the tally form', () => {
     // Submitted: the figures are shown, no longer editable.
     expect(await screen.findByRole('region', { name: 'Blankets given out' })).toBeInTheDocument();
     expect(screen.queryByRole('form', { name: 'Monthly tally' })).toBeNull();
+  });
+
+  it('sends the same Idempotency-Key when a submission is tried again', async () => {
+    const keys: Array<string | null> = [];
+    const { user, fetchMock } = await openTally(draftTally(), {
+      'POST /api/tallies/501/submit': () =>
+        jsonResponse(apiErrorBody(503, 'The server is busy; try again in a moment.'), 503),
+    });
+    const button = screen.getByRole('button', { name: 'Submit for review' });
+
+    await user.click(button);
+    expect(await screen.findByText('The server is busy; try again in a moment.')).toBeVisible();
+    await user.click(button);
+    await waitFor(() => expect(seenRequests(fetchMock, '/api/tallies/501/submit')).toHaveLength(2));
+
+    for (const [, init] of fetchMock.mock.calls) {
+      if (init?.method === 'POST') keys.push(new Headers(init.headers).get('Idempotency-Key'));
+    }
+    expect(keys).toHaveLength(2);
+    expect(keys[0]).toMatch(/^[0-9a-f-]{36}$/);
+    expect(keys[1]).toBe(keys[0]);
   });
 
   it('saves a moment after a change, each time with the version the last save answered', async () => {

@@ -3,6 +3,7 @@ import { Send20Regular } from '@fluentui/react-icons';
 import type { TallyDetail, TallyProblem } from '@tallyloom/core';
 import { useCallback, useEffect, useId, useMemo, useState } from 'react';
 import { useForm, type FieldPath } from 'react-hook-form';
+import { TallySummary } from '@/components/tallies/tally-summary';
 import { useNotify } from '@/components/ui/app-toaster';
 import { FormAlert } from '@/components/ui/form-alert';
 import { newIdempotencyKey, useSubmitTally } from '../api/submit-tally';
@@ -19,7 +20,6 @@ import { serverProblems } from './server-problems';
 import { SubmitTallyDialog, type Acknowledgement } from './submit-tally-dialog';
 import { TallyConflict } from './tally-conflict';
 import { formOf, readForm, type TallyForm } from './tally-form-model';
-import { TallySummary } from './tally-summary';
 
 const useStyles = makeStyles({
   layout: {
@@ -79,6 +79,9 @@ export function TallyEditor({ detail }: TallyEditorProps) {
   const { status } = autosave;
 
   const submit = useSubmitTally();
+  // One key for this revision's submission: sending it again after an answer that never arrived
+  // still makes one submission. A refused attempt stores nothing, so the key may be sent again.
+  const [submissionKey] = useState(newIdempotencyKey);
   const [dialogKey, setDialogKey] = useState(0);
   const [dialogOpen, setDialogOpen] = useState(false);
 
@@ -134,8 +137,7 @@ export function TallyEditor({ detail }: TallyEditorProps) {
         version: autosave.version(),
         acknowledgedWarnings: ack.acknowledgedWarnings,
         acknowledgementNote: ack.acknowledgementNote,
-        // One key per attempt: a request the network repeats still makes one submission.
-        idempotencyKey: newIdempotencyKey(),
+        idempotencyKey: submissionKey,
       },
       {
         onSuccess: () => {

@@ -2,29 +2,9 @@ import {
   monthLabel,
   type TallyCheckContext,
   REPORTING_STATUS_LABELS,
-  TALLY_STATE_LABELS,
   type ReportingStatus,
-  type TallyState,
 } from '@tallyloom/core';
 import { formatDate } from '@/lib/format';
-
-/** BRIEF §8: shown where baby blankets are handed out. */
-export const SAFE_SLEEP_CAUTION =
-  "Follow safe-sleep guidance for infants: no loose blankets in a sleeping infant's cot; the partner agency's own rules come first.";
-
-/** Baby and infant sizes get the safe-sleep caution. */
-export function isBabySize(name: string): boolean {
-  return /\bbaby\b|\binfant\b/i.test(name);
-}
-
-/** "Draft", "Approved", or "Amendment in progress" while an approved tally is being changed. */
-export function tallyStateText(state: TallyState | null, amendmentPending = false): string {
-  if (state === null) return 'Not started';
-  if (amendmentPending && state !== 'approved') {
-    return `Amendment in progress (${TALLY_STATE_LABELS[state].toLowerCase()})`;
-  }
-  return TALLY_STATE_LABELS[state];
-}
 
 /** "Due by 10 Apr 2026", "Late", "Missing (was due 10 Apr 2026)", "On time". */
 export function reportingText(reporting: ReportingStatus, dueOn: string): string {

@@ -51,7 +51,17 @@ describe('an approved tally', () => {
       'href',
       paths.tallyRevisions.getHref(501, { left: 1, right: 2 }),
     );
-    expect(screen.getByText('Thank you.')).toBeInTheDocument();
+    const acknowledged = screen.getByRole('region', {
+      name: 'Warnings acknowledged on submission',
+    });
+    expect(acknowledged).toHaveTextContent('Panels accepted (1,480) is far above');
+    expect(acknowledged).toHaveTextContent('A school drive brought in extra panels this month.');
+
+    const trail = screen.getByRole('region', { name: 'Review trail' });
+    expect(within(trail).getAllByRole('listitem')).toHaveLength(3);
+    expect(within(trail).getAllByRole('listitem')[2]).toHaveTextContent(
+      'Approved · revision 1by Priya Castell“Thank you.”',
+    );
   });
 
   it('is changed by an amendment: a reason first, then the form opens again', async () => {
@@ -86,7 +96,7 @@ describe('an approved tally', () => {
 
     await waitFor(() => expect(seenRequests(fetchMock, '/api/tallies/501/amend')).toHaveLength(1));
     expect(seenRequests(fetchMock, '/api/tallies/501/amend')[0].body).toEqual({
-      version: 3,
+      version: approvedTally().version,
       reason: 'The shelter returned 2 lap blankets unused.',
     });
     expect(await screen.findByRole('form', { name: 'Monthly tally' })).toBeInTheDocument();
@@ -94,6 +104,17 @@ describe('an approved tally', () => {
       screen.getByText('Amendment in progress', { selector: '.fui-MessageBarTitle' }),
     ).toBeInTheDocument();
     expect(screen.getByText(/Revision 1 stays in force in every report/)).toBeInTheDocument();
+  });
+
+  it("flags an opening stock entered by hand for the chapter's first tally", async () => {
+    mockApi({
+      'GET /api/tallies/501': () => jsonResponse(approvedTally({ openingEnteredByHand: true })),
+    });
+    renderApp(paths.tally.getHref(501), { as: demoPeople.chapterLead });
+
+    expect(
+      await screen.findByText("Entered by hand: the chapter's first tally"),
+    ).toBeInTheDocument();
   });
 
   it('offers no Amend to someone who may only read it', async () => {

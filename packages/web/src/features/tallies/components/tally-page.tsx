@@ -10,6 +10,8 @@ import {
 import { DocumentEdit20Regular, Print20Regular } from '@fluentui/react-icons';
 import { monthLabel, type TallyDetail } from '@tallyloom/core';
 import { useState } from 'react';
+import { TallySummary } from '@/components/tallies/tally-summary';
+import { TallyTrail } from '@/components/tallies/tally-trail';
 import { useNotify } from '@/components/ui/app-toaster';
 import { describeProblem, ErrorState } from '@/components/ui/error-state';
 import { FactList } from '@/components/ui/fact-list';
@@ -24,9 +26,7 @@ import { useTally } from '../api/get-tally';
 import { AmendTallyDialog } from './amend-tally-dialog';
 import { reportingText } from './tally-labels';
 import { TallyEditor } from './tally-editor';
-import { TallyStateBadge } from './tally-state-badge';
-import { TallySummary } from './tally-summary';
-import { TallyTrail } from './tally-trail';
+import { TallyStateBadge } from '@/components/tallies/tally-state-badge';
 
 const useStyles = makeStyles({
   page: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXL },
@@ -163,6 +163,11 @@ function Loaded({ detail }: { detail: TallyDetail }) {
                   ? `${formatDateTime(detail.approvedAt)}${detail.approvedByName ? ` by ${detail.approvedByName}` : ''}`
                   : 'Not yet',
               ],
+              ...(detail.openingEnteredByHand
+                ? ([['Opening stock', "Entered by hand: the chapter's first tally"]] as Array<
+                    [string, string]
+                  >)
+                : []),
             ]}
           />
           <TallySummary values={detail.values} detail={detail} />

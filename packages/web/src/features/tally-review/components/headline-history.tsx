@@ -11,7 +11,7 @@ import {
 } from '@tallyloom/core';
 import { useMemo } from 'react';
 import { DataTable } from '@/components/ui/data-table';
-import { formatFigure } from './figures';
+import { formatFigure } from '@/lib/format';
 import { HistorySparkline } from './history-sparkline';
 import { SPARKLINE_COLOURS } from './sparkline-option';
 

@@ -5,7 +5,7 @@ import * as echarts from 'echarts/core';
 import { CanvasRenderer } from 'echarts/renderers';
 import ReactEChartsCore from 'echarts-for-react/esm/core';
 import { useMemo } from 'react';
-import { useChartFontsReady } from '../hooks/use-chart-fonts';
+import { useChartFontsReady } from '@/hooks/use-chart-fonts';
 import { buildSparklineOption, describeSparkline, type SparklineInput } from './sparkline-option';
 
 // Only the pieces the sparkline draws with: the whole library would add ~200 KB to this page.

@@ -2,12 +2,12 @@ import { makeStyles, tokens } from '@fluentui/react-components';
 import { createColumnHelper, type SortingState } from '@tanstack/react-table';
 import { monthLabel, type TallyListParams, type TallySummary } from '@tallyloom/core';
 import { useMemo } from 'react';
+import { TallyStateBadge } from '@/components/tallies/tally-state-badge';
 import { DataTable, type ServerPagination } from '@/components/ui/data-table';
 import { RouterLink } from '@/components/ui/router-link';
 import { paths } from '@/config/paths';
-import { formatDate } from '@/lib/format';
-import { formatFigure } from './figures';
-import { AmendmentBadge, ReportingText, TallyStateBadge } from './tally-badges';
+import { formatDate, formatFigure } from '@/lib/format';
+import { AmendmentBadge, ReportingText } from './tally-badges';
 
 export type QueueSort = NonNullable<TallyListParams['sort']>;
 export type SortDirection = NonNullable<TallyListParams['direction']>;

@@ -4,7 +4,7 @@ import { paths } from '@/config/paths';
 import { apiErrorBody, demoChapters, demoPeople, demoRegions } from '@/testing/fixtures';
 import { jsonResponse, mockApi, seenRequests } from '@/testing/mock-api';
 import { currentPath, renderApp } from '@/testing/render-app';
-import { queueTallies, talliesPage } from '@/testing/tally-review-fixtures';
+import { queueTallies, talliesPage } from '@/testing/tally-fixtures';
 
 type Handlers = Parameters<typeof mockApi>[0];
 

@@ -4,8 +4,7 @@ import { paths } from '@/config/paths';
 import { apiErrorBody, demoPeople } from '@/testing/fixtures';
 import { jsonResponse, mockApi, seenRequests } from '@/testing/mock-api';
 import { currentPath, renderApp } from '@/testing/render-app';
-import { marchValues } from '@/testing/tally-fixtures';
-import { amendedTally, revisionView } from '@/testing/tally-review-fixtures';
+import { amendedTally, marchValues, revisionView } from '@/testing/tally-fixtures';
 
 const tally = amendedTally();
 const approvedValues = marchValues();

@@ -2,7 +2,7 @@ import type { LineSeriesOption } from 'echarts/charts';
 import type { GridComponentOption, TooltipComponentOption } from 'echarts/components';
 import type { ComposeOption } from 'echarts/core';
 import { compareMonths, monthLabel, monthsBetween, type MonthKey } from '@tallyloom/core';
-import { formatFigure } from './figures';
+import { formatFigure } from '@/lib/format';
 import { emberAccent, tallyloomBrandRamp } from '@/theme/brand-ramp';
 
 /** Only what the sparkline registers with ECharts: a line chart on a grid, with a tooltip. */

@@ -5,7 +5,7 @@ import {
   SET_ASIDE_REASONS,
   type TallyValues,
 } from '@tallyloom/core';
-import { formatFigure } from './figures';
+import { formatFigure } from '@/lib/format';
 
 export type TallySection = 'panels' | 'blankets' | 'peopleServed' | 'other';
 

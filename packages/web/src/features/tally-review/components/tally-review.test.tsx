@@ -4,7 +4,7 @@ import { paths } from '@/config/paths';
 import { apiErrorBody, demoPeople } from '@/testing/fixtures';
 import { jsonResponse, mockApi, seenRequests } from '@/testing/mock-api';
 import { renderApp } from '@/testing/render-app';
-import { amendedTally, submittedTally } from '@/testing/tally-review-fixtures';
+import { amendedTally, submittedTally } from '@/testing/tally-fixtures';
 import type { SparklineInput } from './sparkline-option';
 
 // jsdom has no canvas for ECharts to draw on: stand in for the chart with what it was given.
@@ -67,19 +67,27 @@ describe('Reviewing a tally', () => {
     );
 
     const panels = screen.getByRole('region', { name: 'Panels' });
-    expect(panels).toHaveTextContent('Set aside: off-size12');
+    expect(panels).toHaveTextContent('Set aside: Off-size12');
     const blankets = screen.getByRole('region', { name: 'Blankets' });
-    expect(blankets).toHaveTextContent('Given out: Lap to Maple Street Family Shelter38');
-    expect(screen.getByRole('region', { name: 'People served' })).toHaveTextContent(
-      'Maple Street Family Shelter: adults30',
-    );
+    expect(blankets).toHaveTextContent('Given out50');
+    const given = screen.getByRole('table', { name: 'Blankets given out' });
+    expect(
+      within(given).getByRole('row', { name: /Lap Maple Street Family Shelter 38/ }),
+    ).toBeInTheDocument();
+    // Agency, then infants, children, adults, older adults, disaster-affected.
+    const people = screen.getByRole('table', { name: 'People served' });
+    expect(
+      within(people).getByRole('row', { name: 'Maple Street Family Shelter 0 8 30 0 0' }),
+    ).toBeInTheDocument();
     const other = screen.getByRole('region', { name: 'Hours, yarn and notes' });
-    expect(other).toHaveTextContent('Yarn donated4.5 kg');
+    expect(other).toHaveTextContent('Volunteer hours212.5');
+    expect(other).toHaveTextContent('Yarn donated4.5 kg ≈ 9.92 lb');
     expect(other).toHaveTextContent('NotesNone');
 
     const trail = screen.getByRole('region', { name: 'Review trail' });
     expect(within(trail).getAllByRole('listitem')).toHaveLength(2);
     expect(trail).toHaveTextContent('Submitted for review · revision 1');
+    expect(screen.getByRole('table', { name: 'Revisions' })).toHaveTextContent('Submitted');
   });
 
   it('approves with the version it read and an optional comment', async () => {

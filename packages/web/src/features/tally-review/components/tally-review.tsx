@@ -7,6 +7,9 @@ import {
 } from '@fluentui/react-components';
 import { monthLabel, type TallyDetail } from '@tallyloom/core';
 import type { ReactNode } from 'react';
+import { TallyStateBadge } from '@/components/tallies/tally-state-badge';
+import { TallySummary } from '@/components/tallies/tally-summary';
+import { TallyTrail } from '@/components/tallies/tally-trail';
 import { FactList } from '@/components/ui/fact-list';
 import { RouterLink } from '@/components/ui/router-link';
 import { SectionHeading } from '@/components/ui/section-heading';
@@ -14,11 +17,8 @@ import { paths } from '@/config/paths';
 import { formatDate, formatDateTime } from '@/lib/format';
 import { HeadlineHistory } from './headline-history';
 import { ReviewActions } from './review-actions';
-import { ReviewTrail } from './review-trail';
-import { AmendmentBadge, ReportingText, TallyStateBadge } from './tally-badges';
+import { AmendmentBadge, ReportingText } from './tally-badges';
 import { TallyChecks } from './tally-checks';
-import { tallyNamesOf } from './tally-names';
-import { TallySummary } from './tally-summary';
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXXL },
@@ -134,12 +134,10 @@ export function TallyReview({ tally }: { tally: TallyDetail }) {
       </Section>
 
       <section aria-label="Figures">
-        <TallySummary values={tally.values} names={tallyNamesOf(tally)} idPrefix="review-figures" />
+        <TallySummary values={tally.values} detail={tally} idPrefix="review-figures" />
       </section>
 
-      <Section id="review-trail" title="Review trail">
-        <ReviewTrail events={tally.events} />
-      </Section>
+      <TallyTrail detail={tally} idPrefix="review" />
     </div>
   );
 }

@@ -1,6 +1,14 @@
 import { Badge, type BadgeProps } from '@fluentui/react-components';
-import type { TallyState } from '@tallyloom/core';
-import { tallyStateText } from './tally-labels';
+import { TALLY_STATE_LABELS, type TallyState } from '@tallyloom/core';
+
+/** "Draft", "Approved", or "Amendment in progress" while an approved tally is being changed. */
+function tallyStateText(state: TallyState | null, amendmentPending = false): string {
+  if (state === null) return 'Not started';
+  if (amendmentPending && state !== 'approved') {
+    return `Amendment in progress (${TALLY_STATE_LABELS[state].toLowerCase()})`;
+  }
+  return TALLY_STATE_LABELS[state];
+}
 
 const COLOR: Record<TallyState | 'none', BadgeProps['color']> = {
   none: 'subtle',

@@ -22,13 +22,11 @@ import {
 import type { ReactNode } from 'react';
 import { FactList } from '@/components/ui/fact-list';
 import { SectionHeading } from '@/components/ui/section-heading';
-import { formatCount } from '@/lib/format';
-import { yarnConversion } from './more-section';
-import { isBabySize, SAFE_SLEEP_CAUTION } from './tally-labels';
+import { formatCount, formatFigure } from '@/lib/format';
+import { isBabySize, SAFE_SLEEP_CAUTION } from './safe-sleep';
+import { yarnInWords } from './yarn';
 
 type Row = [string, ReactNode];
-
-const hours = new Intl.NumberFormat('en-US', { maximumFractionDigits: 2 });
 
 const useStyles = makeStyles({
   root: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalL },
@@ -42,27 +40,50 @@ const useStyles = makeStyles({
     display: 'grid',
     gridTemplateColumns: 'repeat(auto-fit, minmax(280px, 1fr))',
     gap: tokens.spacingHorizontalXXL,
+    alignItems: 'start',
   },
-  numeric: { textAlign: 'end', fontVariantNumeric: 'tabular-nums' },
+  // Labels take what they need and wrap when the column is narrow; the figures keep at least
+  // 8 characters, so a count never breaks digit by digit. Kept narrow, so that a right-aligned
+  // figure stays near its label.
+  facts: {
+    gridTemplateColumns: 'minmax(min-content, max-content) minmax(8ch, 1fr)',
+    maxWidth: '30rem',
+  },
+  figure: {
+    display: 'block',
+    textAlign: 'end',
+    whiteSpace: 'nowrap',
+    fontVariantNumeric: 'tabular-nums',
+  },
+  // A lone figure among text (hours beside notes) stays where its label ends.
+  inlineFigure: { whiteSpace: 'nowrap', fontVariantNumeric: 'tabular-nums' },
+  numeric: { textAlign: 'end', whiteSpace: 'nowrap', fontVariantNumeric: 'tabular-nums' },
   // A header cell lays its text out in an inner box: push that to the right as well.
   numericHead: { justifyContent: 'flex-end' },
   none: { margin: 0, color: tokens.colorNeutralForeground2 },
-  notes: { margin: 0, whiteSpace: 'pre-wrap' },
+  text: { whiteSpace: 'pre-wrap' },
 });
 
 export interface TallySummaryProps {
   values: TallyValues;
+  /** Where the size and agency names come from. */
   detail: Pick<TallyDetail, 'checkContext' | 'agencies'>;
+  /** Prefix of the section headings' ids, for a page that shows two summaries. */
+  idPrefix?: string;
 }
 
-/** The tally's figures to read and print: no boxes, every number right-aligned. */
-export function TallySummary({ values, detail }: TallySummaryProps) {
+/**
+ * Every figure of a tally, read-only, to read, review and print: the tally page, the review
+ * page and the printed form show the same thing. Figures are right-aligned on one line.
+ */
+export function TallySummary({ values, detail, idPrefix = 'summary' }: TallySummaryProps) {
   const styles = useStyles();
-  const sizeName = (id: number) =>
-    detail.checkContext.blanketSizes.find((size) => size.id === id)?.name ?? `Size ${id}`;
-  const agencyName = (id: number) =>
-    detail.agencies.find((agency) => agency.id === id)?.name ?? `Agency ${id}`;
-  const count = (value: number) => <span className={styles.numeric}>{formatCount(value)}</span>;
+  const id = (section: string) => `${idPrefix}-${section}`;
+  const sizeName = (sizeId: number) =>
+    detail.checkContext.blanketSizes.find((size) => size.id === sizeId)?.name ?? `Size ${sizeId}`;
+  const agencyName = (agencyId: number) =>
+    detail.agencies.find((agency) => agency.id === agencyId)?.name ?? `Agency ${agencyId}`;
+  const figure = (value: number) => <span className={styles.figure}>{formatFigure(value)}</span>;
   const agenciesServed = [...new Set(values.peopleServed.map((line) => line.partnerAgencyId))];
   const served = (agencyId: number, group: (typeof PEOPLE_GROUPS)[number]) =>
     values.peopleServed
@@ -73,54 +94,61 @@ export function TallySummary({ values, detail }: TallySummaryProps) {
   return (
     <div className={styles.root}>
       <div className={styles.columns}>
-        <section className={styles.section} aria-labelledby="summary-panels">
-          <SectionHeading id="summary-panels">Panels</SectionHeading>
+        <section className={styles.section} aria-labelledby={id('panels')}>
+          <SectionHeading id={id('panels')}>Panels</SectionHeading>
           <FactList
+            className={styles.facts}
             rows={[
-              ['Opening stock', count(values.panels.opening)],
-              ['Accepted', count(values.panels.accepted)],
-              ['Used in assembly', count(values.panels.usedInAssembly)],
-              ['Closing stock', count(values.panels.closing)],
+              ['Opening stock', figure(values.panels.opening)],
+              ['Accepted', figure(values.panels.accepted)],
+              ['Used in assembly', figure(values.panels.usedInAssembly)],
+              ['Closing stock', figure(values.panels.closing)],
               ...SET_ASIDE_REASONS.map(
                 (reason) =>
                   [
                     `Set aside: ${SET_ASIDE_LABELS[reason]}`,
-                    count(values.panels.setAside[reason]),
+                    figure(values.panels.setAside[reason]),
                   ] as Row,
               ),
               ...(values.receiptsDifferenceReason
-                ? [['Why accepted differs from receipts', values.receiptsDifferenceReason] as Row]
+                ? [
+                    [
+                      'Why accepted differs from receipts',
+                      <span className={styles.text}>{values.receiptsDifferenceReason}</span>,
+                    ] as Row,
+                  ]
                 : []),
             ]}
           />
         </section>
-        <section className={styles.section} aria-labelledby="summary-blankets">
-          <SectionHeading id="summary-blankets">Blankets</SectionHeading>
+        <section className={styles.section} aria-labelledby={id('blankets')}>
+          <SectionHeading id={id('blankets')}>Blankets</SectionHeading>
           <FactList
+            className={styles.facts}
             rows={[
-              ['Opening stock', count(values.blankets.opening)],
+              ['Opening stock', figure(values.blankets.opening)],
               ...values.blankets.assembled.map(
-                (line) => [`Assembled: ${sizeName(line.blanketSizeId)}`, count(line.count)] as Row,
+                (line) => [`Assembled: ${sizeName(line.blanketSizeId)}`, figure(line.count)] as Row,
               ),
-              ['Finished blankets received', count(values.blankets.received)],
+              ['Finished blankets received', figure(values.blankets.received)],
               [
                 'Given out',
-                count(values.blankets.given.reduce((sum, line) => sum + line.count, 0)),
+                figure(values.blankets.given.reduce((sum, line) => sum + line.count, 0)),
               ],
-              ['Closing stock', count(values.blankets.closing)],
+              ['Closing stock', figure(values.blankets.closing)],
             ]}
           />
         </section>
       </div>
 
-      <section className={styles.section} aria-labelledby="summary-given">
-        <SectionHeading id="summary-given">Blankets given out</SectionHeading>
+      <section className={styles.section} aria-labelledby={id('given')}>
+        <SectionHeading id={id('given')}>Blankets given out</SectionHeading>
         {values.blankets.given.length === 0 ? (
           <Text as="p" className={styles.none}>
             None this month.
           </Text>
         ) : (
-          <Table size="small" aria-labelledby="summary-given">
+          <Table size="small" aria-labelledby={id('given')}>
             <TableHeader>
               <TableRow>
                 <TableHeaderCell>Blanket size</TableHeaderCell>
@@ -151,14 +179,14 @@ export function TallySummary({ values, detail }: TallySummaryProps) {
         ) : null}
       </section>
 
-      <section className={styles.section} aria-labelledby="summary-people">
-        <SectionHeading id="summary-people">People served</SectionHeading>
+      <section className={styles.section} aria-labelledby={id('people')}>
+        <SectionHeading id={id('people')}>People served</SectionHeading>
         {agenciesServed.length === 0 ? (
           <Text as="p" className={styles.none}>
             None recorded this month.
           </Text>
         ) : (
-          <Table size="small" aria-labelledby="summary-people">
+          <Table size="small" aria-labelledby={id('people')}>
             <TableHeader>
               <TableRow>
                 <TableHeaderCell>Partner agency</TableHeaderCell>
@@ -189,22 +217,21 @@ export function TallySummary({ values, detail }: TallySummaryProps) {
         )}
       </section>
 
-      <section className={styles.section} aria-labelledby="summary-more">
-        <SectionHeading id="summary-more">Hours, yarn and notes</SectionHeading>
+      <section className={styles.section} aria-labelledby={id('more')}>
+        <SectionHeading id={id('more')}>Hours, yarn and notes</SectionHeading>
         <FactList
           rows={[
             [
               'Volunteer hours',
-              <span className={styles.numeric}>{hours.format(values.volunteerHours)}</span>,
+              <span className={styles.inlineFigure}>{formatFigure(values.volunteerHours)}</span>,
             ],
             [
               'Yarn donated',
               values.yarnDonated
-                ? (yarnConversion(String(values.yarnDonated.value), values.yarnDonated.unit) ??
-                  `${values.yarnDonated.value} ${values.yarnDonated.unit}`)
+                ? yarnInWords(values.yarnDonated.value, values.yarnDonated.unit)
                 : 'None',
             ],
-            ['Notes', <span className={styles.notes}>{values.notes ?? '—'}</span>],
+            ['Notes', <span className={styles.text}>{values.notes ?? 'None'}</span>],
           ]}
         />
       </section>

@@ -21,6 +21,7 @@ const useStyles = makeStyles({
     gridTemplateColumns: 'repeat(auto-fit, minmax(360px, 1fr))',
     gap: tokens.spacingHorizontalXXL,
     rowGap: tokens.spacingVerticalXL,
+    alignItems: 'start',
   },
   section: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalS },
   list: {
@@ -31,21 +32,26 @@ const useStyles = makeStyles({
     flexDirection: 'column',
     gap: tokens.spacingVerticalS,
   },
-  event: {
-    paddingLeft: tokens.spacingHorizontalM,
-    borderLeft: `3px solid ${tokens.colorNeutralStroke1}`,
+  entry: {
+    display: 'grid',
+    gridTemplateColumns: '140px minmax(0, 1fr)',
+    columnGap: tokens.spacingHorizontalL,
+    paddingBottom: tokens.spacingVerticalS,
+    borderBottom: `1px solid ${tokens.colorNeutralStroke2}`,
   },
-  when: { color: tokens.colorNeutralForeground2 },
+  when: { color: tokens.colorNeutralForeground2, fontVariantNumeric: 'tabular-nums' },
+  what: { display: 'flex', flexDirection: 'column', gap: tokens.spacingVerticalXXS },
   comment: { margin: 0, whiteSpace: 'pre-wrap' },
+  none: { margin: 0, color: tokens.colorNeutralForeground2 },
   numeric: { textAlign: 'end', fontVariantNumeric: 'tabular-nums' },
   // A header cell lays its text out in an inner box: push that to the right as well.
   numericHead: { justifyContent: 'flex-end' },
 });
 
-const EVENT_WORDS: Record<TallyEventKind, string> = {
+const TALLY_EVENT_LABELS: Record<TallyEventKind, string> = {
   created: 'Started',
-  submitted: 'Submitted',
-  returned: 'Returned',
+  submitted: 'Submitted for review',
+  returned: 'Returned to the chapter',
   approved: 'Approved',
   amendment_started: 'Amendment started',
 };
@@ -58,40 +64,55 @@ const REVISION_STATE_WORDS: Record<TallyRevisionState, string> = {
   superseded: 'Replaced by an amendment',
 };
 
-/** Who did what to the tally and when, and its revisions with links to compare them. */
+/**
+ * Each step of the tally's review, oldest first (who, when, what they wrote), and its revisions
+ * with links to compare each with the one before. Shown to the chapter and to reviewers alike.
+ */
 export function TallyTrail({
   detail,
+  idPrefix = 'tally',
 }: {
   detail: Pick<TallyDetail, 'id' | 'events' | 'revisions'>;
+  /** Prefix of the headings' ids. */
+  idPrefix?: string;
 }) {
   const styles = useStyles();
-  const events = [...detail.events].reverse();
+  const trailId = `${idPrefix}-trail`;
+  const revisionsId = `${idPrefix}-revisions`;
   const revisions = [...detail.revisions].sort((a, b) => b.revision - a.revision);
 
   return (
     <div className={styles.root}>
-      <section className={styles.section} aria-labelledby="tally-trail">
-        <SectionHeading id="tally-trail">Review trail</SectionHeading>
-        {events.length === 0 ? (
-          <Text as="p">Nothing has happened to this tally yet.</Text>
+      <section className={styles.section} aria-labelledby={trailId}>
+        <SectionHeading id={trailId}>Review trail</SectionHeading>
+        {detail.events.length === 0 ? (
+          <Text as="p" className={styles.none}>
+            Nothing has happened to this tally yet.
+          </Text>
         ) : (
-          <ol className={styles.list} aria-labelledby="tally-trail">
-            {events.map((event, index) => (
-              <li key={`${event.at}-${index}`} className={styles.event}>
-                <Text weight="semibold">{EVENT_WORDS[event.kind]}</Text>{' '}
-                <Text className={styles.when}>
-                  revision {event.revision} · {formatDateTime(event.at)}
-                  {event.byName ? ` · ${event.byName}` : ''}
-                </Text>
-                {event.comment ? <p className={styles.comment}>{event.comment}</p> : null}
+          <ol className={styles.list} aria-labelledby={trailId}>
+            {detail.events.map((event, index) => (
+              <li key={`${event.at}-${index}`} className={styles.entry}>
+                <span className={styles.when}>{formatDateTime(event.at)}</span>
+                <div className={styles.what}>
+                  <Text weight="semibold">
+                    {TALLY_EVENT_LABELS[event.kind]} · revision {event.revision}
+                  </Text>
+                  <Text size={200}>by {event.byName ?? 'someone no longer listed'}</Text>
+                  {event.comment ? (
+                    <Text as="p" className={styles.comment}>
+                      “{event.comment}”
+                    </Text>
+                  ) : null}
+                </div>
               </li>
             ))}
           </ol>
         )}
       </section>
-      <section className={styles.section} aria-labelledby="tally-revisions">
-        <SectionHeading id="tally-revisions">Revisions</SectionHeading>
-        <Table size="small" aria-labelledby="tally-revisions">
+      <section className={styles.section} aria-labelledby={revisionsId}>
+        <SectionHeading id={revisionsId}>Revisions</SectionHeading>
+        <Table size="small" aria-labelledby={revisionsId}>
           <TableHeader>
             <TableRow>
               <TableHeaderCell
