@@ -8,6 +8,7 @@ import {
   tokens,
 } from '@fluentui/react-components';
 import type { CampaignView, ChapterView, RegionView } from '@tallyloom/core';
+import { RegionChapterFilters } from '@/components/ui/region-chapter-filters';
 
 const useStyles = makeStyles({
   root: {
@@ -74,10 +75,6 @@ export interface ReceiptFiltersProps {
 /** Received between two dates, region and chapter, campaign, and whether a scan is attached. */
 export function ReceiptFilters({ values, onChange, options }: ReceiptFiltersProps) {
   const styles = useStyles();
-  const chapters =
-    values.regionId === undefined
-      ? options.chapters
-      : options.chapters.filter((chapter) => chapter.regionId === values.regionId);
 
   return (
     <div className={styles.root} role="search" aria-label="Filter parcels">
@@ -97,46 +94,13 @@ export function ReceiptFilters({ values, onChange, options }: ReceiptFiltersProp
           onChange={(_event, data) => onChange({ ...values, to: data.value })}
         />
       </Field>
-      {options.regions.length > 1 ? (
-        <Field label="Region" className={styles.select}>
-          <Select
-            value={values.regionId === undefined ? '' : String(values.regionId)}
-            onChange={(_event, data) => {
-              const regionId = idOf(data.value);
-              const chapter = options.chapters.find((c) => c.id === values.chapterId);
-              // A chapter of another region would leave the list empty for no visible reason.
-              const keepChapter = regionId === undefined || chapter?.regionId === regionId;
-              onChange({
-                ...values,
-                regionId,
-                chapterId: keepChapter ? values.chapterId : undefined,
-              });
-            }}
-          >
-            <option value="">All regions</option>
-            {options.regions.map((region) => (
-              <option key={region.id} value={region.id}>
-                {region.name}
-              </option>
-            ))}
-          </Select>
-        </Field>
-      ) : null}
-      {options.chapters.length > 1 ? (
-        <Field label="Chapter" className={styles.select}>
-          <Select
-            value={values.chapterId === undefined ? '' : String(values.chapterId)}
-            onChange={(_event, data) => onChange({ ...values, chapterId: idOf(data.value) })}
-          >
-            <option value="">All chapters</option>
-            {chapters.map((chapter) => (
-              <option key={chapter.id} value={chapter.id}>
-                {chapter.name}
-              </option>
-            ))}
-          </Select>
-        </Field>
-      ) : null}
+      <RegionChapterFilters
+        value={{ regionId: values.regionId, chapterId: values.chapterId }}
+        onChange={(place) => onChange({ ...values, ...place })}
+        regions={options.regions}
+        chapters={options.chapters}
+        className={styles.select}
+      />
       <Field label="Campaign" className={styles.select}>
         <Select
           value={values.campaignId === undefined ? '' : String(values.campaignId)}

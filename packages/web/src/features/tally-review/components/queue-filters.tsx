@@ -8,6 +8,7 @@ import {
   type RegionView,
   type TallyState,
 } from '@tallyloom/core';
+import { RegionChapterFilters } from '@/components/ui/region-chapter-filters';
 
 const useStyles = makeStyles({
   root: {
@@ -57,10 +58,6 @@ export interface QueueFilterOptions {
   showRegion: boolean;
 }
 
-function idOf(value: string): number | undefined {
-  return /^\d+$/.test(value) ? Number(value) : undefined;
-}
-
 function isStateFilter(value: string): value is QueueStateFilter {
   return value === 'all' || (TALLY_STATES as readonly string[]).includes(value);
 }
@@ -74,10 +71,6 @@ export interface QueueFiltersProps {
 /** State, region, chapter and month of the tallies in the review queue. */
 export function QueueFilters({ values, onChange, options }: QueueFiltersProps) {
   const styles = useStyles();
-  const chapters =
-    values.regionId === undefined
-      ? options.chapters
-      : options.chapters.filter((chapter) => chapter.regionId === values.regionId);
   // A month from a shared link may lie outside the recent ones listed: keep it choosable.
   const months =
     values.month && !options.months.includes(values.month)
@@ -101,46 +94,14 @@ export function QueueFilters({ values, onChange, options }: QueueFiltersProps) {
           <option value="all">All states</option>
         </Select>
       </Field>
-      {options.showRegion && options.regions.length > 1 ? (
-        <Field label="Region" className={styles.select}>
-          <Select
-            value={values.regionId === undefined ? '' : String(values.regionId)}
-            onChange={(_event, data) => {
-              const regionId = idOf(data.value);
-              const chapter = options.chapters.find((c) => c.id === values.chapterId);
-              // A chapter of another region would empty the queue for no visible reason.
-              const keepChapter = regionId === undefined || chapter?.regionId === regionId;
-              onChange({
-                ...values,
-                regionId,
-                chapterId: keepChapter ? values.chapterId : undefined,
-              });
-            }}
-          >
-            <option value="">All regions</option>
-            {options.regions.map((region) => (
-              <option key={region.id} value={region.id}>
-                {region.name}
-              </option>
-            ))}
-          </Select>
-        </Field>
-      ) : null}
-      {options.chapters.length > 1 ? (
-        <Field label="Chapter" className={styles.select}>
-          <Select
-            value={values.chapterId === undefined ? '' : String(values.chapterId)}
-            onChange={(_event, data) => onChange({ ...values, chapterId: idOf(data.value) })}
-          >
-            <option value="">All chapters</option>
-            {chapters.map((chapter) => (
-              <option key={chapter.id} value={chapter.id}>
-                {chapter.name}
-              </option>
-            ))}
-          </Select>
-        </Field>
-      ) : null}
+      <RegionChapterFilters
+        value={{ regionId: values.regionId, chapterId: values.chapterId }}
+        onChange={(place) => onChange({ ...values, ...place })}
+        regions={options.regions}
+        chapters={options.chapters}
+        showRegion={options.showRegion}
+        className={styles.select}
+      />
       <Field label="Month" className={styles.select}>
         <Select
           value={values.month}
