@@ -1,7 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
-import { launchBrowser, openWatchedPage, screenshot, type WatchedPage } from './support/browser';
+import { openWatchedPage, screenshot, type WatchedPage } from './support/browser';
+import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
 import { signInThroughForm, unexpected } from './support/sign-in';
 
 const staff = DEMO_SIGN_INS.find((person) => person.role === 'national_staff')!;
@@ -26,21 +26,16 @@ async function figuresShown(page: Page): Promise<void> {
 }
 
 describe('dashboards: staff read the network, a chapter lead reads their chapter', () => {
-  let testApp: TestApp;
+  let served: ServedApp | undefined;
   let browser: Browser;
   let baseUrl: string;
   const pages: WatchedPage[] = [];
 
   beforeAll(async () => {
-    testApp = await startTestApp({ SERVE_WEB: 'true', WEB_DIST_DIR: WEB_DIST });
-    await testApp.app.listen(0, '127.0.0.1');
-    baseUrl = (await testApp.app.getUrl()).replace('[::1]', '127.0.0.1');
-    browser = await launchBrowser();
+    served = await startServedApp();
+    ({ browser, baseUrl } = served);
   });
-  afterAll(async () => {
-    await browser?.close();
-    await testApp?.close();
-  });
+  afterAll(() => stopServedApp(served));
   afterEach(() => {
     for (const { problems } of pages.splice(0)) expect(unexpected(problems)).toEqual([]);
   });

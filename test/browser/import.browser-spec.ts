@@ -5,9 +5,10 @@ import type { Sequelize } from 'sequelize-typescript';
 import type { Browser } from 'playwright-core';
 import { RECEIPT_IMPORT_FIELDS } from '@tallyloom/core';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
-import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
+import type { TestApp } from '../e2e/support/test-app';
+import { openWatchedPage, screenshot } from './support/browser';
 import { signInThroughForm, unexpected } from './support/sign-in';
+import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
 
 const lead = DEMO_SIGN_INS.find((person) => person.role === 'chapter_lead')!;
 
@@ -38,20 +39,16 @@ function sheet(broken: boolean, marker: string): { csv: string; panels: number }
 jest.setTimeout(120_000);
 
 describe('import: a chapter lead imports a sheet of 500 parcels, fixes two bad rows, commits', () => {
+  let served: ServedApp | undefined;
   let testApp: TestApp;
   let browser: Browser;
   let baseUrl: string;
 
   beforeAll(async () => {
-    testApp = await startTestApp({ SERVE_WEB: 'true', WEB_DIST_DIR: WEB_DIST });
-    await testApp.app.listen(0, '127.0.0.1');
-    baseUrl = (await testApp.app.getUrl()).replace('[::1]', '127.0.0.1');
-    browser = await launchBrowser();
+    served = await startServedApp();
+    ({ testApp, browser, baseUrl } = served);
   });
-  afterAll(async () => {
-    await browser?.close();
-    await testApp?.close();
-  });
+  afterAll(() => stopServedApp(served));
 
   it('shows the two bad rows, refuses to import them, then imports the corrected sheet', async () => {
     const marker = `Journey ${Date.now().toString(36)}`;

@@ -2,8 +2,8 @@ import { format } from 'date-fns';
 import type { Browser } from 'playwright-core';
 import { PNG } from 'pngjs';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
-import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
+import { openWatchedPage, screenshot } from './support/browser';
+import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
 import { signInThroughForm, unexpected } from './support/sign-in';
 
 const lead = DEMO_SIGN_INS.find((person) => person.role === 'chapter_lead')!;
@@ -25,20 +25,15 @@ function labelPhoto(): Buffer {
 jest.setTimeout(90_000);
 
 describe('intake: a chapter lead logs a parcel with a scan and finds it in the list', () => {
-  let testApp: TestApp;
+  let served: ServedApp | undefined;
   let browser: Browser;
   let baseUrl: string;
 
   beforeAll(async () => {
-    testApp = await startTestApp({ SERVE_WEB: 'true', WEB_DIST_DIR: WEB_DIST });
-    await testApp.app.listen(0, '127.0.0.1');
-    baseUrl = (await testApp.app.getUrl()).replace('[::1]', '127.0.0.1');
-    browser = await launchBrowser();
+    served = await startServedApp();
+    ({ browser, baseUrl } = served);
   });
-  afterAll(async () => {
-    await browser?.close();
-    await testApp?.close();
-  });
+  afterAll(() => stopServedApp(served));
 
   it('logs a parcel, attaches a photo of its label, and sees it among the parcels', async () => {
     const { page, problems, context } = await openWatchedPage(browser, baseUrl);

@@ -1,9 +1,9 @@
 import { can, type Policy } from '@tallyloom/core';
 import type { Browser } from 'playwright-core';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
-import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
+import { openWatchedPage, screenshot } from './support/browser';
 import { signInThroughForm, unexpected } from './support/sign-in';
+import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
 
 /** Navigation entries and the policy each one needs; a role must see exactly the ones it may use. */
 const NAVIGATION: Array<{ label: string; policy: Policy | null }> = [
@@ -19,20 +19,15 @@ const NAVIGATION: Array<{ label: string; policy: Policy | null }> = [
 jest.setTimeout(60_000);
 
 describe('each demo role signs in and sees its own navigation', () => {
-  let testApp: TestApp;
+  let served: ServedApp | undefined;
   let browser: Browser;
   let baseUrl: string;
 
   beforeAll(async () => {
-    testApp = await startTestApp({ SERVE_WEB: 'true', WEB_DIST_DIR: WEB_DIST });
-    await testApp.app.listen(0, '127.0.0.1');
-    baseUrl = (await testApp.app.getUrl()).replace('[::1]', '127.0.0.1');
-    browser = await launchBrowser();
+    served = await startServedApp();
+    ({ browser, baseUrl } = served);
   });
-  afterAll(async () => {
-    await browser?.close();
-    await testApp?.close();
-  });
+  afterAll(() => stopServedApp(served));
 
   for (const person of DEMO_SIGN_INS) {
     it(`${person.roleLabel}`, async () => {

@@ -1,8 +1,8 @@
 import type { Browser } from 'playwright-core';
-import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { launchBrowser, openWatchedPage, screenshot } from './support/browser';
+import { openWatchedPage, screenshot } from './support/browser';
 import { signInThroughForm, unexpected } from './support/sign-in';
+import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
 
 const staff = DEMO_SIGN_INS.find((person) => person.role === 'national_staff')!;
 
@@ -10,21 +10,15 @@ const staff = DEMO_SIGN_INS.find((person) => person.role === 'national_staff')!;
 jest.setTimeout(60_000);
 
 describe('smoke: the app in Chromium', () => {
-  let testApp: TestApp;
+  let served: ServedApp | undefined;
   let browser: Browser;
   let baseUrl: string;
 
   beforeAll(async () => {
-    testApp = await startTestApp({ SERVE_WEB: 'true', WEB_DIST_DIR: WEB_DIST });
-    await testApp.app.listen(0, '127.0.0.1');
-    baseUrl = await testApp.app.getUrl();
-    baseUrl = baseUrl.replace('[::1]', '127.0.0.1');
-    browser = await launchBrowser();
+    served = await startServedApp();
+    ({ browser, baseUrl } = served);
   });
-  afterAll(async () => {
-    await browser?.close();
-    await testApp?.close();
-  });
+  afterAll(() => stopServedApp(served));
 
   it('shows the demo network from the database, in our theme and in Roboto', async () => {
     const { page, problems, context } = await openWatchedPage(browser, baseUrl);

@@ -2,8 +2,8 @@ import { format, subMonths } from 'date-fns';
 import type { Browser, Locator, Page } from 'playwright-core';
 import { QueryTypes, Sequelize } from 'sequelize';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { startTestApp, WEB_DIST, type TestApp } from '../e2e/support/test-app';
-import { launchBrowser, openWatchedPage, screenshot, type WatchedPage } from './support/browser';
+import { openWatchedPage, screenshot, type WatchedPage } from './support/browser';
+import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
 import { signInThroughForm, unexpected } from './support/sign-in';
 
 const lead = DEMO_SIGN_INS.find((person) => person.role === 'chapter_lead')!;
@@ -55,21 +55,16 @@ async function as(
 }
 
 describe('monthly tallies: file, return, fix, approve and amend', () => {
-  let testApp: TestApp;
+  let served: ServedApp | undefined;
   let browser: Browser;
   let baseUrl: string;
   const pages: WatchedPage[] = [];
 
   beforeAll(async () => {
-    testApp = await startTestApp({ SERVE_WEB: 'true', WEB_DIST_DIR: WEB_DIST });
-    await testApp.app.listen(0, '127.0.0.1');
-    baseUrl = (await testApp.app.getUrl()).replace('[::1]', '127.0.0.1');
-    browser = await launchBrowser();
+    served = await startServedApp();
+    ({ browser, baseUrl } = served);
   });
-  afterAll(async () => {
-    await browser?.close();
-    await testApp?.close();
-  });
+  afterAll(() => stopServedApp(served));
   afterEach(() => {
     for (const { problems } of pages.splice(0)) expect(unexpected(problems)).toEqual([]);
   });
