@@ -5,6 +5,7 @@ import { createNetworkSetup } from './20261201-0003-create-network-setup';
 import { createParcelReceipts } from './20261201-0004-create-parcel-receipts';
 import { createMonthlyTallies } from './20261202-0005-create-monthly-tallies';
 import { createReportSnapshots } from './20261202-0006-create-report-snapshots';
+import { createExports } from './20261202-0007-create-exports';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
 export const MIGRATIONS: Migration[] = [
@@ -14,4 +15,5 @@ export const MIGRATIONS: Migration[] = [
   createParcelReceipts,
   createMonthlyTallies,
   createReportSnapshots,
+  createExports,
 ];

@@ -19,6 +19,7 @@ export * from './panels/size-chart';
 export * from './contract/receipt-import';
 export * from './contract/tallies';
 export * from './contract/reports';
+export * from './contract/exports';
 export * from './tallies/months';
 export * from './tallies/empty-values';
 export * from './tallies/headline';

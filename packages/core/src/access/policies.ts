@@ -41,6 +41,13 @@ export const POLICIES = {
   'tallies.review': ['network_admin', 'national_staff', 'regional_coordinator'],
   /** Read report snapshots, dashboards and campaign progress (in scope). */
   'reports.read': [...ROLES],
+  /**
+   * Export a table the person can read (receipts, tallies, review queue, snapshots) with the
+   * same filters and scope; each table also needs its own read policy.
+   */
+  'exports.tables': [...ROLES],
+  /** Build the impact pack workbook for funding applications (aggregates only). */
+  'exports.impact-pack': ['network_admin', 'national_staff', 'grant_writer'],
   /** See the background jobs, their progress and failures, and retry a failed one. */
   'jobs.manage': ['network_admin', 'national_staff'],
   /** Invite people, change their role or scope, deactivate them. */
