@@ -20,6 +20,8 @@ async function main(): Promise<number> {
   mkdirSync(reports, { recursive: true });
 
   ensureDebianPackage('chromium', 'chromium', 'the browser tests');
+  // One export test opens a workbook in a real spreadsheet program (headless, no desktop).
+  ensureDebianPackage('libreoffice', 'libreoffice-calc-nogui', 'the spreadsheet export tests');
   const env = await startServers('throwaway');
   const testEnv = {
     ...env,

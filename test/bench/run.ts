@@ -7,6 +7,8 @@ import { onShutdown, shutdown } from '../../db/lifecycle/shutdown';
 import { waitForHttp } from '../../db/lifecycle/wait-for-http';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
 import { load } from './load';
+import { benchReports } from './reports-bench';
+import { sizeFromArgs } from './synthetic-network';
 
 /**
  * `npm run bench`: the production build of the API on throwaway servers, measured as ratios
@@ -16,6 +18,7 @@ import { load } from './load';
 async function main(): Promise<void> {
   const seconds = Number(process.env.BENCH_SECONDS ?? 5);
   const connections = Number(process.env.BENCH_CONNECTIONS ?? 20);
+  const size = sizeFromArgs(process.argv.slice(2));
   const env = await startServers('throwaway');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], env, 'Migrations');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'seed'], env, 'Demo seed');
@@ -26,6 +29,7 @@ async function main(): Promise<void> {
     {},
     'The core build',
   );
+  await runCommand('npm', ['run', '--silent', 'build', '-w', 'reports'], {}, 'The reports build');
   await runCommand('npm', ['run', '--silent', 'build', '-w', 'services/api'], {}, 'The API build');
 
   const port = await findFreePort();
@@ -38,6 +42,8 @@ async function main(): Promise<void> {
     SERVE_WEB: 'false',
     // The bench signs in once; the throttle is not what is measured.
     SIGN_IN_THROTTLE_PER_MINUTE: '1000',
+    // Snapshots are rebuilt by the benchmark itself, timed; no job may rebuild meanwhile.
+    JOB_PROCESSORS: 'off',
   });
   let exited = false;
   api.once('exit', () => (exited = true));
@@ -74,6 +80,22 @@ async function main(): Promise<void> {
     'p95 ÷ health p95': (r.p95Ms / Math.max(baseline.p95Ms, 0.001)).toFixed(2),
   }));
   console.table(rows);
+
+  step(
+    `Reports on a synthetic network: ${size.regions} regions, ${size.chapters} chapters, ` +
+      `${size.months} months, ${size.receiptsPerMonth} receipts per chapter-month…`,
+  );
+  Object.assign(process.env, env, appSecrets(false), { NODE_ENV: 'production', LOG_LEVEL: 'warn' });
+  const reports = await benchReports({
+    databaseUrl: env.DATABASE_URL,
+    generatorUrl: env.DATABASE_MIGRATION_URL,
+    baseUrl,
+    auth,
+    size,
+    connections: Number(process.env.BENCH_REPORT_CONNECTIONS ?? 50),
+    seconds,
+  });
+  console.table(reports.rows);
 }
 
 main()

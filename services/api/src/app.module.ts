@@ -12,6 +12,7 @@ import { AuthModule } from './auth/auth.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { UsersModule } from './users/users.module';
+import { CacheModule } from './cache/cache.module';
 import { JobsModule } from './jobs/jobs.module';
 import { RegionsModule } from './regions/regions.module';
 import { AgenciesModule } from './agencies/agencies.module';
@@ -65,6 +66,7 @@ export class AppModule {
           }),
         }),
         JobsModule,
+        CacheModule,
         // The built web app, with index.html for every client route; /api stays the API's.
         ...(options.worker ? [] : [webAppModule()]),
         AuditModule,

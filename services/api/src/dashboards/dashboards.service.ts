@@ -13,6 +13,7 @@ import {
   type SnapshotScope,
 } from '@tallyloom/core';
 import { Chapter } from '../chapters/models/chapter.model';
+import { ViewCache } from '../cache/view-cache';
 import type { Actor } from '../common/access/actor';
 import { chapterScope, regionScope, within } from '../common/access/scope';
 import { Region } from '../regions/models/region.model';
@@ -37,6 +38,7 @@ export class DashboardsService {
     private readonly settings: SettingsService,
     @InjectModel(Region) private readonly regions: typeof Region,
     @InjectModel(Chapter) private readonly chapters: typeof Chapter,
+    private readonly cache: ViewCache,
   ) {}
 
   /** Network-wide roles only: the others are pointed to their own dashboard. */
@@ -50,11 +52,13 @@ export class DashboardsService {
       throw new ForbiddenException(
         `Your dashboard is your chapter's: /api/dashboards/chapters/${actor.chapterId ?? ':id'}`,
       );
-    const regions = await this.regions.findAll({
-      attributes: ['id', 'name'],
-      order: [['name', 'ASC']],
+    return this.cache.remember(cacheKey('network', 0, query), async () => {
+      const regions = await this.regions.findAll({
+        attributes: ['id', 'name'],
+        order: [['name', 'ASC']],
+      });
+      return this.dashboard(NETWORK, 'region', regions, query);
     });
-    return this.dashboard(NETWORK, 'region', regions, query);
   }
 
   /** A region in scope; a chapter lead's dashboard is their chapter's, so regions are not found. */
@@ -67,17 +71,19 @@ export class DashboardsService {
             attributes: ['id', 'name'],
           });
     if (!region) throw new NotFoundException('No such region.');
-    const chapters = await this.chapters.findAll({
-      where: { regionId: id },
-      attributes: ['id', 'name'],
-      order: [['name', 'ASC']],
+    return this.cache.remember(cacheKey('region', region.id, query), async () => {
+      const chapters = await this.chapters.findAll({
+        where: { regionId: id },
+        attributes: ['id', 'name'],
+        order: [['name', 'ASC']],
+      });
+      return this.dashboard(
+        { scope: 'region', scopeId: region.id, scopeName: region.name },
+        'chapter',
+        chapters,
+        query,
+      );
     });
-    return this.dashboard(
-      { scope: 'region', scopeId: region.id, scopeName: region.name },
-      'chapter',
-      chapters,
-      query,
-    );
   }
 
   async chapter(actor: Actor, id: number, query: PeriodQuery): Promise<DashboardView> {
@@ -86,11 +92,13 @@ export class DashboardsService {
       attributes: ['id', 'name', 'regionId'],
     });
     if (!chapter) throw new NotFoundException('No such chapter.');
-    return this.dashboard(
-      { scope: 'chapter', scopeId: chapter.id, scopeName: chapter.name },
-      'chapter',
-      [],
-      query,
+    return this.cache.remember(cacheKey('chapter', chapter.id, query), () =>
+      this.dashboard(
+        { scope: 'chapter', scopeId: chapter.id, scopeName: chapter.name },
+        'chapter',
+        [],
+        query,
+      ),
     );
   }
 
@@ -151,6 +159,16 @@ export class DashboardsService {
       asOf: oldestAsOf([current, before, ...trend, ...breakdown].map((view) => view.asOf)),
     };
   }
+}
+
+/**
+ * A dashboard's cache key: the scope (already checked against the actor) and the period as
+ * asked. The default period is last month, so this month is part of the key.
+ */
+function cacheKey(scope: SnapshotScope, scopeId: number, query: PeriodQuery): string {
+  const thisMonth = new Date().toISOString().slice(0, 7);
+  const { periodKind, period, from, to } = query;
+  return `dashboard:${JSON.stringify([scope, scopeId, thisMonth, periodKind, period, from, to])}`;
 }
 
 /** The months of the period, or for a single month the twelve months ending with it. */

@@ -22,6 +22,7 @@ import {
 } from '@tallyloom/reports';
 import { QueryTypes, Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
+import { ViewCache } from '../cache/view-cache';
 import { SettingsService } from '../settings/settings.service';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
 import { ReportSnapshot } from './models/report-snapshot.model';
@@ -63,11 +64,12 @@ export class SnapshotBuilder {
     @InjectModel(ReportSnapshot) private readonly snapshots: typeof ReportSnapshot,
     @InjectModel(CampaignSnapshot) private readonly campaignSnapshots: typeof CampaignSnapshot,
     private readonly settings: SettingsService,
+    private readonly views: ViewCache,
   ) {}
 
   /** The snapshots one chapter-month touches, and the campaigns its receipts credit. */
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
-    return this.locked(async (transaction) => {
+    return this.lockedThenInvalidate(async (transaction) => {
       const chapters = await this.chapters(transaction);
       const chapter = chapters.find((each) => each.chapterId === chapterId);
       if (!chapter) throw new Error(`chapter ${chapterId} does not exist`);
@@ -87,7 +89,7 @@ export class SnapshotBuilder {
 
   /** Every scope × every period in which it has tallies, and every campaign. */
   async rebuildAll(progress: Progress = () => Promise.resolve()): Promise<RebuildSummary> {
-    return this.locked(async (transaction) => {
+    return this.lockedThenInvalidate(async (transaction) => {
       const chapters = await this.chapters(transaction);
       const { fiscalYearStartMonth } = await this.settings.current();
       const tallied = (
@@ -224,6 +226,15 @@ export class SnapshotBuilder {
       replacements: query.replacements,
       transaction,
     });
+  }
+
+  /** Cached dashboards are dropped once the new snapshots are committed, not before. */
+  private async lockedThenInvalidate<T>(
+    work: (transaction: Transaction) => Promise<T>,
+  ): Promise<T> {
+    const result = await this.locked(work);
+    await this.views.invalidate();
+    return result;
   }
 
   /**

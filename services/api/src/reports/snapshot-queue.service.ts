@@ -25,10 +25,11 @@ export class SnapshotQueue {
   }
 
   /**
-   * After a tally's approval has committed. Never awaited by the caller and never throws: the
-   * approval stands even when Redis is away, and the nightly full rebuild repairs the snapshots.
+   * After a tally's submission, return or approval has committed (figures, pending counts and
+   * compliance may change). Never awaited by the caller and never throws: the change stands even
+   * when Redis is away, and the nightly full rebuild repairs the snapshots.
    */
-  afterApproval(data: ChapterMonthJob): void {
+  afterTallyChange(data: ChapterMonthJob): void {
     this.chapterMonth(data).catch((error: Error) =>
       this.logger.warn(
         `could not enqueue the snapshot rebuild of chapter ${data.chapterId} ${data.month}: ${error.message}`,

@@ -8,6 +8,7 @@ import {
 } from '@tallyloom/core';
 import type { Transaction } from 'sequelize';
 import { AuditService } from '../audit/audit.service';
+import type { ChapterMonthJob } from '../reports/report-jobs';
 import { SnapshotQueue } from '../reports/snapshot-queue.service';
 import type { SignedInContext } from '../common/context/request-context';
 import { invalidField } from '../common/validation/field-errors';
@@ -61,6 +62,7 @@ export class TallyReviewService {
     const acknowledgedWarnings = [...new Set(body.acknowledgedWarnings)];
     const acknowledgementNote = body.acknowledgementNote ?? null;
     const servedPerBlanketWarnFactor = await this.checkContext.servedPerBlanketWarnFactor();
+    let submitted: ChapterMonthJob | null = null;
     await this.lock.write(context, id, {
       version: body.version,
       action: 'submit',
@@ -84,6 +86,7 @@ export class TallyReviewService {
             fields: found.map((problem) => ({ field: problem.field, messages: [problem.message] })),
           });
         const now = new Date();
+        submitted = chapterMonthOf(tally);
         await current.update(
           {
             state: 'submitted',
@@ -122,6 +125,8 @@ export class TallyReviewService {
         return { state: 'submitted', firstSubmittedAt: tally.firstSubmittedAt ?? now };
       },
     });
+    // Pending counts and compliance change with a submission, after it has committed.
+    if (submitted) this.snapshots.afterTallyChange(submitted);
     return this.reader.detail(context.actor, id);
   }
 
@@ -131,13 +136,13 @@ export class TallyReviewService {
    */
   async approve(context: SignedInContext, id: number, body: ApproveTallyDto): Promise<TallyDetail> {
     const comment = body.comment ?? null;
-    let approved: { chapterId: number; month: string } | null = null;
+    let approved: ChapterMonthJob | null = null;
     await this.lock.write(context, id, {
       version: body.version,
       action: 'approve',
       apply: async ({ tally, current, transaction }) => {
         if (current.submittedBy === context.actor.id) throw new ForbiddenException(OWN_APPROVAL);
-        approved = { chapterId: tally.chapterId, month: tally.month.slice(0, 7) };
+        approved = chapterMonthOf(tally);
         const superseded = tally.approvedRevision;
         if (superseded !== null && superseded !== current.revision) {
           await this.revisionRows.update(
@@ -170,16 +175,18 @@ export class TallyReviewService {
       },
     });
     // Only now has the approval committed, so the rebuild reads it.
-    if (approved) this.snapshots.afterApproval(approved);
+    if (approved) this.snapshots.afterTallyChange(approved);
     return this.reader.detail(context.actor, id);
   }
 
   /** Sends a submitted tally back to the chapter with a comment saying what to fix. */
   async return(context: SignedInContext, id: number, body: ReturnTallyDto): Promise<TallyDetail> {
+    let returned: ChapterMonthJob | null = null;
     await this.lock.write(context, id, {
       version: body.version,
       action: 'return',
       apply: async ({ tally, current, transaction }) => {
+        returned = chapterMonthOf(tally);
         await current.update({ state: 'returned' }, { transaction });
         await this.event(
           context,
@@ -203,6 +210,8 @@ export class TallyReviewService {
         return { state: 'returned' };
       },
     });
+    // A returned tally is no longer pending.
+    if (returned) this.snapshots.afterTallyChange(returned);
     return this.reader.detail(context.actor, id);
   }
 
@@ -258,4 +267,9 @@ export class TallyReviewService {
       { transaction },
     );
   }
+}
+
+/** The chapter-month whose snapshots a change of this tally touches. */
+function chapterMonthOf(tally: { chapterId: number; month: string }): ChapterMonthJob {
+  return { chapterId: tally.chapterId, month: tally.month.slice(0, 7) };
 }
