@@ -54,15 +54,30 @@ describe('report snapshots: rebuilt by jobs after approvals', () => {
       { chapterId: world.chapter.id, regionId: world.region.id },
     );
 
-  /** Polls until `ready` holds for the chapter's snapshots: the job runs in its own time. */
+  /** True while a rebuild of this chapter is still queued or running. */
+  async function rebuildPending(world: TallyChapter): Promise<boolean> {
+    const jobs = await queueOf(testApp.app, QueueName.Reports).getJobs([
+      'waiting',
+      'active',
+      'delayed',
+    ]);
+    return jobs.some((job) => job?.data?.chapterId === world.chapter.id);
+  }
+
+  /**
+   * Polls until `ready` holds for the chapter's snapshots and no rebuild of the chapter is left
+   * (a submission and its approval each queue one): the jobs run in their own time.
+   */
   async function eventually(
     world: TallyChapter,
     ready: (rows: StoredSnapshot[]) => boolean,
   ): Promise<StoredSnapshot[]> {
     const deadline = Date.now() + 120_000;
     for (;;) {
+      // Asked first: once nothing is left, the rows read next are the final ones.
+      const settled = !(await rebuildPending(world));
       const rows = await ofChapter(world);
-      if (ready(rows)) return rows;
+      if (settled && ready(rows)) return rows;
       if (Date.now() > deadline) throw new Error('the snapshot job did not run within 2 minutes');
       await new Promise((resolve) => setTimeout(resolve, 250));
     }
