@@ -79,6 +79,15 @@ const DEMO_CAMPAIGNS: Array<{
     regionCode: null,
   },
   {
+    // Running on the demo's today (Dec 2026): October is approved, November still pending.
+    code: 'DWD27',
+    name: 'Deep Winter Drive 2026–27',
+    goalPanels: 5000,
+    startsOn: '2026-10-15',
+    endsOn: '2027-02-28',
+    regionCode: null,
+  },
+  {
     code: 'DWD25',
     name: 'Deep Winter Drive 2024–25',
     goalPanels: 3500,

@@ -281,7 +281,8 @@ function receiptRow(
   );
   let campaignId: number | null = null;
   let code: string | null = null;
-  if (running.length > 0 && chance(random, 0.55)) {
+  // About a quarter of the parcels sent while a drive runs name it: drives land near their goals.
+  if (running.length > 0 && chance(random, 0.25)) {
     const campaign = pick(random, running);
     if (chance(random, 0.06)) code = mistype(campaign.code, random);
     else {

@@ -1,6 +1,7 @@
 import { emptySnapshotFigures, quarterPeriod, type SnapshotFigures } from '@tallyloom/core';
 import type { ChapterMonthFact } from './chapter-month-facts';
 import {
+  expectedChapterMonths,
   rollUpSnapshots,
   targetsOfChapterMonth,
   targetsOfMonths,
@@ -123,5 +124,42 @@ describe('snapshot targets', () => {
         ),
       ].sort(),
     );
+  });
+});
+
+describe('expectedChapterMonths', () => {
+  it('lists each chapter-month inside both the range and the chapter’s active dates', () => {
+    const closing: ChapterInfo[] = [
+      ...chapters,
+      { chapterId: 4, regionId: 2, dueDay: 10, activeFrom: '2025-01-01', activeTo: '2026-02-14' },
+      { chapterId: 5, regionId: 2, dueDay: 10, activeFrom: '2026-06-01', activeTo: null },
+    ];
+    const expected = expectedChapterMonths(closing, '2026-01', '2026-03');
+    expect(expected.map(({ chapterId, month }) => `${chapterId}:${month}`)).toEqual([
+      '1:2026-01',
+      '1:2026-02',
+      '1:2026-03',
+      // Chapter 2 opened in March; chapter 4 closed during February; chapter 5 opens later.
+      '2:2026-03',
+      '3:2026-01',
+      '3:2026-02',
+      '3:2026-03',
+      '4:2026-01',
+      '4:2026-02',
+    ]);
+  });
+
+  it('gives a silent chapter its own snapshot, which shows the month as missing', () => {
+    const targets = targetsOfMonths(
+      chapters,
+      expectedChapterMonths(chapters, '2026-03', '2026-03'),
+      1,
+    ).filter((target) => target.scope === 'chapter' && target.scopeId === 3);
+    const [march] = rollUpSnapshots(input, targets).filter(
+      (snapshot) => snapshot.period.key === '2026-03',
+    );
+    expect(march.figures.approvedTallies).toBe(0);
+    // Due 10 April, judged on 20 May: missing.
+    expect(march.compliance).toMatchObject({ onTime: 0, late: 0, missing: 1, open: 0 });
   });
 });

@@ -4,6 +4,7 @@
  * Pure, so the job and its tests share one roll-up.
  */
 import {
+  monthsBetween,
   addCompliance,
   addSnapshotFigures,
   combineMonthsInto,
@@ -205,6 +206,26 @@ export function targetsOfMonths(
     }
   }
   return [...targets.values()];
+}
+
+/**
+ * Every month each chapter was expected to report in, from `from` to `to` ('YYYY-MM', both
+ * inclusive) and within its active dates: a month without any tally still gets its snapshot, so
+ * the chapter's own dashboard shows that month as missing or open instead of nothing.
+ */
+export function expectedChapterMonths(
+  chapters: readonly ChapterInfo[],
+  from: MonthKey,
+  to: MonthKey,
+): Array<{ chapterId: number; month: MonthKey }> {
+  return chapters.flatMap((chapter) => {
+    const first = chapter.activeFrom.slice(0, 7) > from ? chapter.activeFrom.slice(0, 7) : from;
+    const activeTo = chapter.activeTo?.slice(0, 7) ?? to;
+    const last = activeTo < to ? activeTo : to;
+    return first > last
+      ? []
+      : monthsBetween(first, last).map((month) => ({ chapterId: chapter.chapterId, month }));
+  });
 }
 
 /** The months a set of periods covers: what facts and statuses the roll-up must be given. */

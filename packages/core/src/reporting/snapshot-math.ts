@@ -42,9 +42,10 @@ export function emptySnapshotFigures(): SnapshotFigures {
 function sumFlows(a: SnapshotFigures, b: SnapshotFigures): SnapshotFigures {
   const sum = emptySnapshotFigures();
   for (const measure of FLOW_MEASURES) sum[measure] = a[measure] + b[measure];
-  // Decimal measures (hours, kg) would drift in binary floating point: keep 3 decimals.
-  sum.volunteerHours = roundTo3(sum.volunteerHours);
-  sum.yarnKg = roundTo3(sum.yarnKg);
+  // Hours and kg are stored with 2 and 6 decimals; a sum of such values has no more, so rounding
+  // to 6 only removes binary floating-point noise and never moves a figure (display rounds later).
+  sum.volunteerHours = roundToStored(sum.volunteerHours);
+  sum.yarnKg = roundToStored(sum.yarnKg);
   for (const group of PEOPLE_GROUPS) {
     sum.peopleServedByGroup[group] =
       (a.peopleServedByGroup[group] ?? 0) + (b.peopleServedByGroup[group] ?? 0);
@@ -52,8 +53,8 @@ function sumFlows(a: SnapshotFigures, b: SnapshotFigures): SnapshotFigures {
   return sum;
 }
 
-function roundTo3(value: number): number {
-  return Math.round(value * 1000) / 1000;
+function roundToStored(value: number): number {
+  return Math.round(value * 1e6) / 1e6;
 }
 
 /** Adds the figures of two scopes for the same period (e.g. two chapters of a region). */

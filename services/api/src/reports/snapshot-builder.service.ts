@@ -8,6 +8,7 @@ import {
   campaignsOfChapterMonthSql,
   chapterMonthFactsSql,
   chaptersSql,
+  expectedChapterMonths,
   factFromRow,
   monthRangeOf,
   rollUpSnapshots,
@@ -101,7 +102,14 @@ export class SnapshotBuilder {
           transaction,
         )
       ).map((row) => ({ chapterId: Number(row.chapter_id), month: String(row.month) }));
-      const targets = targetsOfMonths(chapters, tallied, fiscalYearStartMonth);
+      // From the network's first tally to this month, months nobody filed count too.
+      const firstMonth = tallied.reduce<string | null>(
+        (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
+        null,
+      );
+      const thisMonth = new Date().toISOString().slice(0, 7);
+      const expected = firstMonth ? expectedChapterMonths(chapters, firstMonth, thisMonth) : [];
+      const targets = targetsOfMonths(chapters, [...tallied, ...expected], fiscalYearStartMonth);
       await progress(10);
       const built = await this.build(chapters, targets, null, transaction);
       await progress(40);

@@ -17,10 +17,12 @@ const useStyles = makeStyles({
 export interface DashboardNotesProps {
   asOf: string;
   pendingTallies: number;
+  /** Chapter-months of the period with no tally filed yet (open or missing). */
+  unfiled: number;
 }
 
 /** When the figures were built, what they leave out, and what they are (BRIEF §8). */
-export function DashboardNotes({ asOf, pendingTallies }: DashboardNotesProps) {
+export function DashboardNotes({ asOf, pendingTallies, unfiled }: DashboardNotesProps) {
   const styles = useStyles();
   return (
     <div className={styles.root}>
@@ -33,6 +35,13 @@ export function DashboardNotes({ asOf, pendingTallies }: DashboardNotesProps) {
           {pendingTallies === 1
             ? '1 tally awaiting approval is not included.'
             : `${formatCount(pendingTallies)} tallies awaiting approval are not included.`}
+        </Text>
+      ) : null}
+      {unfiled > 0 ? (
+        <Text as="p" className={mergeClasses(styles.line, styles.pending)}>
+          <Info16Regular aria-hidden="true" />
+          {unfiled === 1 ? '1 chapter has' : `${formatCount(unfiled)} chapter-months have`} not
+          filed for this period yet: the change against the previous period may be understated.
         </Text>
       ) : null}
       <Text as="p" className={styles.line}>

@@ -56,6 +56,12 @@ describe('Dashboards', () => {
     expect(card('Volunteer hours')).toHaveTextContent('212.5');
 
     expect(screen.getByText('3 tallies awaiting approval are not included.')).toBeInTheDocument();
+    // 2 missing + 1 open chapter-months in the fixture's compliance.
+    expect(
+      screen.getByText(
+        '3 chapter-months have not filed for this period yet: the change against the previous period may be understated.',
+      ),
+    ).toBeInTheDocument();
     expect(
       screen.getByText('Figures for funders are estimates built from volunteer reports.'),
     ).toBeInTheDocument();

@@ -119,7 +119,11 @@ export function DashboardView({ target, query, onQueryChange }: DashboardViewPro
     <>
       {header}
       {picker}
-      <DashboardNotes asOf={dashboard.data.asOf} pendingTallies={current.pendingTallies} />
+      <DashboardNotes
+        asOf={dashboard.data.asOf}
+        pendingTallies={current.pendingTallies}
+        unfiled={current.compliance.open + current.compliance.missing}
+      />
       {nothing ? (
         <EmptyState title={`No approved tallies for ${current.period.label}`}>
           The figures appear here once the chapters’ tallies for this period are filed and approved.
