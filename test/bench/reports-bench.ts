@@ -1,4 +1,4 @@
-import type { INestApplicationContext } from '@nestjs/common';
+import type { DynamicModule, INestApplicationContext, Type } from '@nestjs/common';
 import 'reflect-metadata';
 import { step } from '../../db/lifecycle/console';
 import { connectTo } from './db-connection';
@@ -83,12 +83,16 @@ async function builderContext(): Promise<{
   process.env.JOB_PROCESSORS = 'off';
   const dist = '../../services/api/dist';
   const { NestFactory } = await import('@nestjs/core');
-  const { AppModule } = await import(`${dist}/app.module.js`);
-  const { SnapshotBuilder } = await import(`${dist}/reports/snapshot-builder.service.js`);
+  const { AppModule } = (await import(`${dist}/app.module.js`)) as {
+    AppModule: { forRoot(): DynamicModule };
+  };
+  const { SnapshotBuilder } = (await import(`${dist}/reports/snapshot-builder.service.js`)) as {
+    SnapshotBuilder: Type<SnapshotBuilderLike>;
+  };
   const context = await NestFactory.createApplicationContext(AppModule.forRoot(), {
     logger: ['error'],
   });
-  return { context, builder: context.get(SnapshotBuilder) as SnapshotBuilderLike };
+  return { context, builder: context.get(SnapshotBuilder) };
 }
 
 async function dashboardP95(input: ReportsBenchInput, connections: number): Promise<number> {
@@ -201,9 +205,9 @@ function monthBack(back: number): string {
 async function benchChapterIds(databaseUrl: string): Promise<number[]> {
   const connection = await connectTo(databaseUrl);
   try {
-    const rows = (await connection.query(
+    const rows = await connection.query<Array<{ id: number }>>(
       "SELECT id FROM chapters WHERE name LIKE 'Bench chapter %' ORDER BY id",
-    )) as Array<{ id: number }>;
+    );
     return rows.map((row) => Number(row.id));
   } finally {
     await connection.end();

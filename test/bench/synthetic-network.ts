@@ -186,7 +186,7 @@ export class SyntheticNetwork {
   }
 
   private async ids(sql: string): Promise<number[]> {
-    const rows = (await this.connection.query(sql)) as Array<{ id: number }>;
+    const rows = await this.connection.query<Array<{ id: number }>>(sql);
     return rows.map((row) => Number(row.id));
   }
 }

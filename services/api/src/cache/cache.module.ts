@@ -23,7 +23,7 @@ import { ViewCache } from './view-cache';
 export class CacheModule implements OnApplicationShutdown {
   constructor(@Inject(REDIS_CLIENT) private readonly redis: Redis) {}
 
-  async onApplicationShutdown(): Promise<void> {
+  onApplicationShutdown(): void {
     this.redis.disconnect();
   }
 }

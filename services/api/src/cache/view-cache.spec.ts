@@ -7,7 +7,7 @@ describe('ViewCache', () => {
   let cache: ViewCache;
 
   beforeEach(async () => {
-    redis = new RedisMock() as unknown as Redis;
+    redis = new RedisMock();
     await redis.flushall();
     cache = new ViewCache(redis);
   });
@@ -15,7 +15,7 @@ describe('ViewCache', () => {
   afterEach(() => redis.disconnect());
 
   it('builds once, then answers from Redis with the same value', async () => {
-    const build = jest.fn(async () => ({ figures: { panels: 1234 } }));
+    const build = jest.fn(() => Promise.resolve({ figures: { panels: 1234 } }));
     const first = await cache.remember('dashboard:a', build);
     const second = await cache.remember('dashboard:a', build);
     expect(second).toEqual(first);
@@ -23,13 +23,13 @@ describe('ViewCache', () => {
   });
 
   it('keeps keys apart', async () => {
-    await cache.remember('dashboard:a', async () => 'a');
-    expect(await cache.remember('dashboard:b', async () => 'b')).toBe('b');
+    await cache.remember('dashboard:a', () => Promise.resolve('a'));
+    expect(await cache.remember('dashboard:b', () => Promise.resolve('b'))).toBe('b');
   });
 
   it('builds anew after invalidate, and never reads the older entry again', async () => {
     let figure = 1;
-    const build = async () => ({ figure });
+    const build = () => Promise.resolve({ figure });
     await cache.remember('dashboard:a', build);
     figure = 2;
     expect(await cache.remember('dashboard:a', build)).toEqual({ figure: 1 });
@@ -38,7 +38,7 @@ describe('ViewCache', () => {
   });
 
   it('stores entries with an expiry, so stale generations leave Redis on their own', async () => {
-    await cache.remember('dashboard:a', async () => 1);
+    await cache.remember('dashboard:a', () => Promise.resolve(1));
     const keys = await redis.keys('views:*:dashboard:a');
     expect(keys).toHaveLength(1);
     const ttl = await redis.ttl(keys[0]);
@@ -48,16 +48,12 @@ describe('ViewCache', () => {
 
   it('treats a failing Redis as a miss: the view is built and no error reaches the caller', async () => {
     const broken = {
-      get: jest.fn(async () => {
-        throw new Error('Connection is closed.');
-      }),
+      get: jest.fn(() => Promise.reject(new Error('Connection is closed.'))),
       set: jest.fn(),
-      incr: jest.fn(async () => {
-        throw new Error('Connection is closed.');
-      }),
+      incr: jest.fn(() => Promise.reject(new Error('Connection is closed.'))),
     } as unknown as Redis;
     const offline = new ViewCache(broken);
-    const build = jest.fn(async () => 'built');
+    const build = jest.fn(() => Promise.resolve('built'));
     expect(await offline.remember('dashboard:a', build)).toBe('built');
     expect(await offline.remember('dashboard:a', build)).toBe('built');
     expect(build).toHaveBeenCalledTimes(2);
