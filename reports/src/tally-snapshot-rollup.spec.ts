@@ -1,6 +1,7 @@
 import { emptySnapshotFigures, quarterPeriod, type SnapshotFigures } from '@tallyloom/core';
 import type { ChapterMonthFact } from './chapter-month-facts';
 import {
+  networkFromRegions,
   expectedChapterMonths,
   rollUpSnapshots,
   targetsOfChapterMonth,
@@ -161,5 +162,31 @@ describe('expectedChapterMonths', () => {
     expect(march.figures.approvedTallies).toBe(0);
     // Due 10 April, judged on 20 May: missing.
     expect(march.compliance).toMatchObject({ onTime: 0, late: 0, missing: 1, open: 0 });
+  });
+});
+
+describe('networkFromRegions', () => {
+  it('equals the network rolled up from every chapter, given every expected month its rows', () => {
+    // The full rebuild's targets: tallied months plus every month a chapter was expected.
+    const targets = targetsOfMonths(
+      chapters,
+      [
+        ...facts.map(({ chapterId, month }) => ({ chapterId, month })),
+        ...expectedChapterMonths(chapters, '2026-01', '2026-05'),
+      ],
+      7,
+    );
+    const built = rollUpSnapshots(input, targets);
+    const networks = built.filter((snapshot) => snapshot.scope === 'network');
+    expect(networks.length).toBeGreaterThan(3);
+    for (const network of networks) {
+      const regions = built.filter(
+        (snapshot) =>
+          snapshot.scope === 'region' &&
+          snapshot.period.kind === network.period.kind &&
+          snapshot.period.key === network.period.key,
+      );
+      expect(networkFromRegions(network.period, regions)).toEqual(network);
+    }
   });
 });

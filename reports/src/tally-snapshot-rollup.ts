@@ -87,12 +87,21 @@ export function rollUpSnapshots(
   const currentMonth = input.today.slice(0, 7);
   const factOf = new Map(input.facts.map((fact) => [`${fact.chapterId}:${fact.month}`, fact]));
   const statusOf = new Map(input.statuses.map((s) => [`${s.chapterId}:${s.month}`, s]));
-  const chaptersOf = (scope: SnapshotScope, scopeId: number): ChapterInfo[] =>
-    input.chapters.filter(
-      (chapter) =>
-        scope === 'network' ||
-        (scope === 'region' ? chapter.regionId === scopeId : chapter.chapterId === scopeId),
-    );
+  // Indexed once: a full rebuild asks for the chapters of a scope for every scope × period.
+  const byRegion = new Map<number, ChapterInfo[]>();
+  const byId = new Map<number, ChapterInfo>();
+  for (const chapter of input.chapters) {
+    byId.set(chapter.chapterId, chapter);
+    const list = byRegion.get(chapter.regionId);
+    if (list) list.push(chapter);
+    else byRegion.set(chapter.regionId, [chapter]);
+  }
+  const chaptersOf = (scope: SnapshotScope, scopeId: number): readonly ChapterInfo[] => {
+    if (scope === 'network') return input.chapters;
+    if (scope === 'region') return byRegion.get(scopeId) ?? [];
+    const chapter = byId.get(scopeId);
+    return chapter ? [chapter] : [];
+  };
 
   const cache = new Map<string, ChapterPeriod>();
   const chapterPeriod = (chapter: ChapterInfo, period: Period): ChapterPeriod => {
@@ -155,6 +164,40 @@ export function rollUpSnapshots(
     });
   }
   return [...built.values()];
+}
+
+/** A stored or freshly built region snapshot, as far as the network needs it. */
+export type RegionPart = Pick<
+  BuiltSnapshot,
+  'scopeId' | 'figures' | 'compliance' | 'pendingTallies' | 'sourceRevisions'
+>;
+
+/**
+ * The network for one period as the sum of its regions (every chapter is in exactly one region,
+ * and every measure adds across scopes), so a change in one region needs only that region's
+ * facts and the other regions' stored rows, not every chapter of the network.
+ */
+export function networkFromRegions(period: Period, regions: readonly RegionPart[]): BuiltSnapshot {
+  let figures = emptySnapshotFigures();
+  let compliance = emptyCompliance();
+  let pendingTallies = 0;
+  const sources: Array<[number, number]> = [];
+  for (const region of regions) {
+    figures = addSnapshotFigures(figures, region.figures);
+    compliance = addCompliance(compliance, region.compliance);
+    pendingTallies += region.pendingTallies;
+    sources.push(...region.sourceRevisions);
+  }
+  sources.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+  return {
+    scope: 'network',
+    scopeId: 0,
+    period,
+    figures,
+    compliance,
+    pendingTallies,
+    sourceRevisions: sources,
+  };
 }
 
 /**

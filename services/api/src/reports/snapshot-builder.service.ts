@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import { periodDates, type MonthKey } from '@tallyloom/core';
+import { periodDates, type MonthKey, type Period } from '@tallyloom/core';
 import {
   buildCampaignSnapshot,
   campaignCreditFromRow,
@@ -11,6 +11,7 @@ import {
   expectedChapterMonths,
   factFromRow,
   monthRangeOf,
+  networkFromRegions,
   rollUpSnapshots,
   tallyStatusSql,
   targetsOfChapterMonth,
@@ -18,6 +19,9 @@ import {
   type BuiltCampaignSnapshot,
   type BuiltSnapshot,
   type ChapterInfo,
+  type FactsFilter,
+  type RegionPart,
+  type SnapshotTarget,
   type SqlQuery,
   type TallyStatus,
 } from '@tallyloom/reports';
@@ -26,17 +30,21 @@ import type { Sequelize } from 'sequelize-typescript';
 import { ViewCache } from '../cache/view-cache';
 import { SettingsService } from '../settings/settings.service';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
-import { ReportSnapshot } from './models/report-snapshot.model';
 import type { RebuildSummary } from './report-jobs';
 
 // One rebuild at a time across every worker: two jobs touching the same region would otherwise
 // each read before the other's tally committed and the later write could carry stale figures.
 const LOCK_NAME = 'tallyloom:report-snapshots';
 const LOCK_WAIT_SECONDS = 120;
-const WRITE_CHUNK = 500;
+const WRITE_CHUNK = 1000;
 
 type Progress = (percent: number) => Promise<unknown>;
 type Row = Record<string, unknown>;
+
+/** A JSON column (the driver may give text or a parsed value). */
+function jsonOf<T>(value: unknown): T {
+  return (typeof value === 'string' ? JSON.parse(value) : value) as T;
+}
 
 /** A DATE column as 'YYYY-MM-DD' (the driver may give a Date or text). */
 function isoDate(value: unknown): string | null {
@@ -62,13 +70,16 @@ function isoTimestamp(value: unknown): string | null {
 export class SnapshotBuilder {
   constructor(
     @InjectConnection() private readonly sequelize: Sequelize,
-    @InjectModel(ReportSnapshot) private readonly snapshots: typeof ReportSnapshot,
     @InjectModel(CampaignSnapshot) private readonly campaignSnapshots: typeof CampaignSnapshot,
     private readonly settings: SettingsService,
     private readonly views: ViewCache,
   ) {}
 
-  /** The snapshots one chapter-month touches, and the campaigns its receipts credit. */
+  /**
+   * The snapshots one chapter-month touches, and the campaigns its receipts credit. Chapter and
+   * region are built from the region's facts; the network from that region and the other
+   * regions' stored rows, so the work does not grow with the size of the network.
+   */
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async (transaction) => {
       const chapters = await this.chapters(transaction);
@@ -76,8 +87,24 @@ export class SnapshotBuilder {
       if (!chapter) throw new Error(`chapter ${chapterId} does not exist`);
       const { fiscalYearStartMonth } = await this.settings.current();
       const targets = targetsOfChapterMonth(chapter, month, fiscalYearStartMonth);
-      const range = monthRangeOf(targets)!;
-      const built = await this.build(chapters, targets, range, transaction);
+      const inRegion = chapters.filter((each) => each.regionId === chapter.regionId);
+      const built = await this.build(
+        inRegion,
+        targets.filter((target) => target.scope !== 'network'),
+        { ...monthRangeOf(targets)!, chapterIds: inRegion.map((each) => each.chapterId) },
+        transaction,
+      );
+      const periods = targets.filter((target) => target.scope === 'network').map((t) => t.period);
+      const otherRegions = await this.storedRegions(periods, chapter.regionId, transaction);
+      for (const period of periods) {
+        const samePeriod = (each: { period: Pick<Period, 'kind' | 'key'> }) =>
+          each.period.kind === period.kind && each.period.key === period.key;
+        const regions = [
+          ...built.filter((each) => each.scope === 'region' && samePeriod(each)),
+          ...otherRegions.filter(samePeriod),
+        ];
+        built.push(networkFromRegions(period, regions));
+      }
       const asOf = new Date();
       await this.writeSnapshots(built, asOf, transaction);
       const campaignIds = (
@@ -86,6 +113,38 @@ export class SnapshotBuilder {
       const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
       return { snapshots: built.length, campaigns };
     });
+  }
+
+  /** The stored region rows of these periods, except one region's. */
+  private async storedRegions(
+    periods: Period[],
+    exceptRegionId: number,
+    transaction: Transaction,
+  ): Promise<Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>> {
+    const replacements: Record<string, unknown> = { exceptRegionId };
+    const wanted = periods.map((period, index) => {
+      replacements[`kind${index}`] = period.kind;
+      replacements[`key${index}`] = period.key;
+      return `(period_kind = :kind${index} AND period_key = :key${index})`;
+    });
+    const rows = await this.select(
+      {
+        sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies,
+                     source_revisions
+                FROM report_snapshots
+               WHERE scope = 'region' AND scope_id <> :exceptRegionId AND (${wanted.join(' OR ')})`,
+        replacements,
+      },
+      transaction,
+    );
+    return rows.map((row) => ({
+      scopeId: Number(row.scope_id),
+      period: { kind: row.period_kind as Period['kind'], key: String(row.period_key) },
+      figures: jsonOf(row.figures),
+      compliance: jsonOf(row.compliance),
+      pendingTallies: Number(row.pending_tallies),
+      sourceRevisions: jsonOf(row.source_revisions),
+    }));
   }
 
   /** Every scope × every period in which it has tallies, and every campaign. */
@@ -111,7 +170,7 @@ export class SnapshotBuilder {
       const expected = firstMonth ? expectedChapterMonths(chapters, firstMonth, thisMonth) : [];
       const targets = targetsOfMonths(chapters, [...tallied, ...expected], fiscalYearStartMonth);
       await progress(10);
-      const built = await this.build(chapters, targets, null, transaction);
+      const built = await this.build(chapters, targets, {}, transaction);
       await progress(40);
       const asOf = new Date();
       await this.writeSnapshots(built, asOf, transaction, async (done) =>
@@ -128,11 +187,10 @@ export class SnapshotBuilder {
 
   private async build(
     chapters: ChapterInfo[],
-    targets: ReturnType<typeof targetsOfMonths>,
-    range: { from: MonthKey; to: MonthKey } | null,
+    targets: SnapshotTarget[],
+    filter: FactsFilter,
     transaction: Transaction,
   ): Promise<BuiltSnapshot[]> {
-    const filter = range ?? {};
     const facts = (await this.select(chapterMonthFactsSql(filter), transaction)).map(factFromRow);
     const statuses: TallyStatus[] = (await this.select(tallyStatusSql(filter), transaction)).map(
       (row) => ({
@@ -146,6 +204,10 @@ export class SnapshotBuilder {
     return rollUpSnapshots({ facts, chapters, statuses, today }, targets);
   }
 
+  /**
+   * Upserts snapshots in multi-row statements of plain SQL: a full rebuild writes a row per
+   * scope × period, and building model instances for each would cost more than the SQL itself.
+   */
   private async writeSnapshots(
     built: BuiltSnapshot[],
     asOf: Date,
@@ -153,35 +215,35 @@ export class SnapshotBuilder {
     progress: (done: number) => Promise<unknown> = () => Promise.resolve(),
   ): Promise<void> {
     for (let start = 0; start < built.length; start += WRITE_CHUNK) {
-      const rows = built.slice(start, start + WRITE_CHUNK).map((snapshot) => {
+      const chunk = built.slice(start, start + WRITE_CHUNK);
+      const values: unknown[] = [];
+      for (const snapshot of chunk) {
         const { fromDate, toDate } = periodDates(snapshot.period);
-        return {
-          scope: snapshot.scope,
-          scopeId: snapshot.scopeId,
-          periodKind: snapshot.period.kind,
-          periodKey: snapshot.period.key,
-          periodFrom: fromDate,
-          periodTo: toDate,
-          figures: snapshot.figures,
-          compliance: snapshot.compliance,
-          pendingTallies: snapshot.pendingTallies,
-          sourceRevisions: snapshot.sourceRevisions,
+        values.push(
+          snapshot.scope,
+          snapshot.scopeId,
+          snapshot.period.kind,
+          snapshot.period.key,
+          fromDate,
+          toDate,
+          JSON.stringify(snapshot.figures),
+          JSON.stringify(snapshot.compliance),
+          snapshot.pendingTallies,
+          JSON.stringify(snapshot.sourceRevisions),
           asOf,
-        };
-      });
-      await this.snapshots.bulkCreate(rows, {
-        transaction,
-        updateOnDuplicate: [
-          'periodFrom',
-          'periodTo',
-          'figures',
-          'compliance',
-          'pendingTallies',
-          'sourceRevisions',
-          'asOf',
-        ],
-      });
-      await progress(start + rows.length);
+        );
+      }
+      await this.sequelize.query(
+        `INSERT INTO report_snapshots (scope, scope_id, period_kind, period_key, period_from,
+           period_to, figures, compliance, pending_tallies, source_revisions, as_of)
+         VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}
+         ON DUPLICATE KEY UPDATE period_from = VALUES(period_from), period_to = VALUES(period_to),
+           figures = VALUES(figures), compliance = VALUES(compliance),
+           pending_tallies = VALUES(pending_tallies), source_revisions = VALUES(source_revisions),
+           as_of = VALUES(as_of)`,
+        { replacements: values, transaction },
+      );
+      await progress(start + chunk.length);
     }
   }
 
