@@ -96,6 +96,33 @@ export class SnapshotBuilder {
       );
       const periods = targets.filter((target) => target.scope === 'network').map((t) => t.period);
       const otherRegions = await this.storedRegions(periods, chapter.regionId, transaction);
+      // A region without a row for a period (nothing filed there since the last full rebuild)
+      // is built from its facts, so its chapters still count as missing or open.
+      const missing = periods.flatMap((period) =>
+        [...new Set(chapters.map((each) => each.regionId))]
+          .filter(
+            (regionId) =>
+              regionId !== chapter.regionId &&
+              !otherRegions.some(
+                (each) =>
+                  each.scopeId === regionId &&
+                  each.period.kind === period.kind &&
+                  each.period.key === period.key,
+              ),
+          )
+          .map((regionId) => ({ scope: 'region' as const, scopeId: regionId, period })),
+      );
+      if (missing.length > 0) {
+        const missingIds = new Set(missing.map((target) => target.scopeId));
+        const theirChapters = chapters.filter((each) => missingIds.has(each.regionId));
+        const filled = await this.build(
+          theirChapters,
+          missing,
+          { ...monthRangeOf(missing)!, chapterIds: theirChapters.map((each) => each.chapterId) },
+          transaction,
+        );
+        otherRegions.push(...filled);
+      }
       for (const period of periods) {
         const samePeriod = (each: { period: Pick<Period, 'kind' | 'key'> }) =>
           each.period.kind === period.kind && each.period.key === period.key;
