@@ -1,6 +1,6 @@
-import type { DynamicModule, INestApplicationContext, Type } from '@nestjs/common';
-import 'reflect-metadata';
+import type { INestApplicationContext, Type } from '@nestjs/common';
 import { step } from '../../db/lifecycle/console';
+import { apiContext, apiExport } from './api-context';
 import { connectTo } from './db-connection';
 import { load } from './load';
 import { SyntheticNetwork, type NetworkSize } from './synthetic-network';
@@ -75,23 +75,16 @@ async function rawGroupBy(databaseUrl: string): Promise<number> {
   }
 }
 
-/** A Nest application context of the compiled API with processors off: the builder alone. */
+/** The snapshot builder of the compiled API, in a context of its own. */
 async function builderContext(): Promise<{
   context: INestApplicationContext;
   builder: SnapshotBuilderLike;
 }> {
-  process.env.JOB_PROCESSORS = 'off';
-  const dist = '../../services/api/dist';
-  const { NestFactory } = await import('@nestjs/core');
-  const { AppModule } = (await import(`${dist}/app.module.js`)) as {
-    AppModule: { forRoot(): DynamicModule };
-  };
-  const { SnapshotBuilder } = (await import(`${dist}/reports/snapshot-builder.service.js`)) as {
-    SnapshotBuilder: Type<SnapshotBuilderLike>;
-  };
-  const context = await NestFactory.createApplicationContext(AppModule.forRoot(), {
-    logger: ['error'],
-  });
+  const context = await apiContext();
+  const SnapshotBuilder = await apiExport<Type<SnapshotBuilderLike>>(
+    'reports/snapshot-builder.service',
+    'SnapshotBuilder',
+  );
   return { context, builder: context.get(SnapshotBuilder) };
 }
 

@@ -2,11 +2,13 @@ import { appSecrets } from '../../db/lifecycle/app-secrets';
 import { LifecycleError, exitWith, step } from '../../db/lifecycle/console';
 import { findFreePort } from '../../db/lifecycle/ports';
 import { runCommand, startLongRunning, stopLongRunning } from '../../db/lifecycle/run-command';
-import { startServers } from '../../db/lifecycle/servers';
+import { startServers, throwawayRoot } from '../../db/lifecycle/servers';
+import { join } from 'node:path';
 import { onShutdown, shutdown } from '../../db/lifecycle/shutdown';
 import { waitForHttp } from '../../db/lifecycle/wait-for-http';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
 import { load } from './load';
+import { benchExports } from './exports-bench';
 import { benchReports } from './reports-bench';
 import { sizeFromArgs } from './synthetic-network';
 
@@ -96,6 +98,26 @@ async function main(): Promise<void> {
     seconds,
   });
   console.table(reports.rows);
+
+  step('Exports of the synthetic receipts (staff, every column)…');
+  const exportRows = await benchExports({
+    databaseUrl: env.DATABASE_URL,
+    staffEmail: staff.email,
+    sizes: exportSizes(process.argv.slice(2)),
+    folder: join(throwawayRoot(), 'bench-exports'),
+  });
+  console.table(exportRows);
+}
+
+/** `--export-sizes 100000,1000000` (the default). */
+function exportSizes(args: readonly string[]): number[] {
+  const at = args.indexOf('--export-sizes');
+  if (at < 0) return [100_000, 1_000_000];
+  const sizes = (args[at + 1] ?? '').split(',').map(Number);
+  if (sizes.length === 0 || sizes.some((size) => !Number.isInteger(size) || size < 1)) {
+    throw new LifecycleError('--export-sizes needs whole numbers separated by commas');
+  }
+  return sizes;
 }
 
 main()
