@@ -13,6 +13,8 @@ const NAVIGATION: Array<{ label: string; policy: Policy | null }> = [
   { label: 'Network set-up', policy: 'network.manage' },
   { label: 'People', policy: 'people.manage' },
   { label: 'Dev outbox', policy: 'outbox.read' },
+  { label: 'Exports', policy: 'exports.tables' },
+  { label: 'Impact pack', policy: 'exports.impact-pack' },
 ];
 
 // A browser journey takes seconds, not the unit-test default of five.

@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { RequestMethod } from '@nestjs/common';
 import { METHOD_METADATA, PATH_METADATA } from '@nestjs/common/constants';
 import { ModulesContainer } from '@nestjs/core';
@@ -149,6 +150,10 @@ describe('every route × every role × in and out of scope', () => {
         outOfScope: String(away.chapters[0].id),
       },
     };
+    // Exports are their requester's own: an id that is not yours is not found, like an unknown one.
+    const someoneElsesExport = { inScope: randomUUID(), outOfScope: randomUUID() };
+    params['/api/exports/:id'] = someoneElsesExport;
+    params['/api/exports/:id/file'] = someoneElsesExport;
     // The campaign dashboards scope campaigns exactly as the campaigns routes do.
     params['/api/dashboards/campaigns/:id'] = params['/api/campaigns/:id'];
   });

@@ -24,6 +24,8 @@ import { TalliesModule } from './tallies/tallies.module';
 import { PROCESSOR_MODULES } from './jobs/processor-modules';
 import { JobsAdminModule } from './jobs/jobs-admin.module';
 import { RemindersModule } from './reminders/reminders.module';
+import { ExportsModule } from './exports/exports.module';
+import { ImpactPackModule } from './impact-pack/impact-pack.module';
 
 export interface AppModuleOptions {
   /** `npm run worker`: job processors always on, whatever JOB_PROCESSORS says, and no web app. */
@@ -85,6 +87,8 @@ export class AppModule {
         DashboardsModule,
         JobsAdminModule,
         RemindersModule,
+        ExportsModule,
+        ImpactPackModule,
         ...(processors ? PROCESSOR_MODULES : []),
       ],
     };

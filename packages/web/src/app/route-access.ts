@@ -37,6 +37,8 @@ export const routeAccess = {
   campaigns: { name: 'Campaigns', policy: 'reports.read' },
   campaign: { name: 'Campaign progress', policy: 'reports.read' },
   jobs: { name: 'Jobs', policy: 'jobs.manage' },
+  exports: { name: 'My exports', policy: 'exports.tables' },
+  impactPack: { name: 'Impact pack', policy: 'exports.impact-pack' },
   account: { name: 'My account', policy: null },
 } as const satisfies Record<string, RouteAccess>;
 

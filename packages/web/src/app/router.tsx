@@ -311,6 +311,25 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               handle: { access: routeAccess.jobs } satisfies AccessHandle,
             },
             {
+              path: paths.exports.path,
+              lazy: async () => ({ Component: (await import('./routes/exports')).ExportsRoute }),
+              loader: requireAccess(routeAccess.exports),
+              // The page changes only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.exports } satisfies AccessHandle,
+            },
+            {
+              path: paths.impactPack.path,
+              lazy: async () => ({
+                Component: (await import('./routes/impact-pack')).ImpactPackRoute,
+              }),
+              loader: requireAccess(routeAccess.impactPack),
+              errorElement: pageError,
+              handle: { access: routeAccess.impactPack } satisfies AccessHandle,
+            },
+            {
               path: paths.account.path,
               element: <AccountRoute />,
               loader: requireAccess(routeAccess.account),

@@ -100,6 +100,14 @@ export const paths = {
     path: '/jobs',
     getHref: () => '/jobs',
   },
+  exports: {
+    path: '/exports',
+    getHref: () => '/exports',
+  },
+  impactPack: {
+    path: '/impact-pack',
+    getHref: () => '/impact-pack',
+  },
   setup: {
     path: '/setup',
     getHref: () => '/setup',

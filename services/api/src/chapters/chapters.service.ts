@@ -3,6 +3,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { AuditService } from '../audit/audit.service';
+import { ViewCache } from '../cache/view-cache';
 import type { Actor } from '../common/access/actor';
 import { chapterScope, within } from '../common/access/scope';
 import type { SignedInContext } from '../common/context/request-context';
@@ -22,6 +23,7 @@ export class ChaptersService {
     @InjectModel(Chapter) private readonly chapters: typeof Chapter,
     @InjectModel(Region) private readonly regions: typeof Region,
     private readonly audit: AuditService,
+    private readonly views: ViewCache,
   ) {}
 
   /** Chapters in the person's scope; a region filter outside scope simply finds nothing. */
@@ -73,6 +75,8 @@ export class ChaptersService {
       .catch((error: unknown) => {
         throw asTakenField(error, TAKEN);
       });
+    // Dashboards list every chapter by name: drop the cached ones.
+    await this.views.invalidate();
     return this.get(context.actor, chapter.id);
   }
 
@@ -101,6 +105,7 @@ export class ChaptersService {
       .catch((error: unknown) => {
         throw asTakenField(error, TAKEN);
       });
+    await this.views.invalidate();
     return this.get(context.actor, id);
   }
 

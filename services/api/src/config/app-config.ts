@@ -1,5 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { createHmac } from 'node:crypto';
 import { resolve } from 'node:path';
 import { DEFAULT_UPLOADS_DIR } from '../storage/storage-layout';
 
@@ -98,6 +99,23 @@ export class AppConfig {
 
   get uploadMaxBytes(): number {
     return Number(this.config.getOrThrow('UPLOAD_MAX_BYTES'));
+  }
+
+  get exportLinkTtlMinutes(): number {
+    return Number(this.config.getOrThrow('EXPORT_LINK_TTL_MINUTES'));
+  }
+
+  /** Rows per xlsx sheet (Excel's 1,048,576 unless set lower). */
+  get exportXlsxRowsPerSheet(): number {
+    return Number(this.config.getOrThrow('EXPORT_XLSX_ROWS_PER_SHEET'));
+  }
+
+  /** Signs export download links; derived from JWT_SECRET unless set, so it never equals it. */
+  get exportLinkSecret(): string {
+    return (
+      this.config.get<string>('EXPORT_LINK_SECRET') ??
+      createHmac('sha256', this.jwtSecret).update('tallyloom export links').digest('hex')
+    );
   }
 
   /** Whether this process runs the job processors ('off': it only enqueues). */

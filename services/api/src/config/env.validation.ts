@@ -54,6 +54,14 @@ export const envValidationSchema = Joi.object({
     .min(1)
     .max(100 * 1024 * 1024)
     .default(10 * 1024 * 1024),
+  // How long an export's download link works (and its file is kept) after the export is done.
+  EXPORT_LINK_TTL_MINUTES: Joi.number().integer().min(1).max(10_080).default(60),
+  // Rows per xlsx sheet, header and totals included, before a table continues on the next sheet.
+  // Only lower than Excel's limit (for tests and for people whose programs take fewer); at least
+  // 3, so a sheet holds the header, one data row and the totals.
+  EXPORT_XLSX_ROWS_PER_SHEET: Joi.number().integer().min(3).max(1_048_576).default(1_048_576),
+  // Key of the download links' signatures; without it, one is derived from JWT_SECRET.
+  EXPORT_LINK_SECRET: Joi.string().min(32).optional(),
   // 'in-process': this process runs every job processor; 'off': it only enqueues (`npm run worker` runs them).
   JOB_PROCESSORS: Joi.string().valid('in-process', 'off').default('in-process'),
   // How long a worker's hold on a job lasts before another worker takes the job over (Bull's lock).

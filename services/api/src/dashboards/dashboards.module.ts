@@ -15,5 +15,7 @@ import { SnapshotReader } from './snapshot-reader';
   imports: [SequelizeModule.forFeature([Region, Chapter]), SettingsModule],
   controllers: [DashboardsController, CampaignDashboardsController, PublicCampaignsController],
   providers: [DashboardsService, CampaignProgressService, SnapshotReader],
+  // The impact pack lays out the very figures the dashboards show, read the same way.
+  exports: [DashboardsService, CampaignProgressService],
 })
 export class DashboardsModule {}

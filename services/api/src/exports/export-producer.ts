@@ -6,6 +6,8 @@ export interface ExportRun {
   actor: Actor;
   /** An absolute path to write the finished file to (its folder exists). */
   filePath: string;
+  /** Rows per xlsx sheet before a table continues on the next (config: EXPORT_XLSX_ROWS_PER_SHEET). */
+  xlsxRowsPerSheet?: number;
   /** Report 0–100; cheap to call often (throttled by the caller). */
   progress: (percent: number) => Promise<void>;
 }

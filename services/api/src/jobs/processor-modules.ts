@@ -1,4 +1,5 @@
 import type { Type } from '@nestjs/common';
+import { ExportsJobsModule } from '../exports/exports-jobs.module';
 import { RemindersJobsModule } from '../reminders/reminders-jobs.module';
 import { ReportsJobsModule } from '../reports/reports-jobs.module';
 
@@ -7,4 +8,8 @@ import { ReportsJobsModule } from '../reports/reports-jobs.module';
  * JOB_PROCESSORS=off, and `npm run worker` always does. Producers live in the feature modules,
  * so enqueuing works in every process.
  */
-export const PROCESSOR_MODULES: Type[] = [ReportsJobsModule, RemindersJobsModule];
+export const PROCESSOR_MODULES: Type[] = [
+  ReportsJobsModule,
+  RemindersJobsModule,
+  ExportsJobsModule,
+];

@@ -4,6 +4,8 @@ export enum QueueName {
   Reports = 'reports',
   /** E-mails chapter leads whose monthly tally is missing near its due day. */
   Reminders = 'reminders',
+  /** Writes spreadsheet exports to files, and removes them when their links expire. */
+  Exports = 'exports',
 }
 
 export const ALL_QUEUES: QueueName[] = Object.values(QueueName);

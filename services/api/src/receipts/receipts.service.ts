@@ -1,7 +1,7 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { can, type FieldProblem } from '@tallyloom/core';
-import { Op, col, fn, literal, type Order, type Transaction, type WhereOptions } from 'sequelize';
+import { col, fn, literal, type Transaction, type WhereOptions } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { AuditService } from '../audit/audit.service';
 import { AuditEntry } from '../audit/models/audit-entry.model';
@@ -25,6 +25,7 @@ import { ReceiptScan } from './models/receipt-scan.model';
 import { ReceiptReferenceData } from './receipt-reference-data';
 import { auditableReceipt, toReceiptView, toScanView } from './receipt.mappers';
 import { latestToday, receiptProblems, receiptValues, type ResolvedInput } from './receipt-rules';
+import { receiptListFilters, receiptListOrder, receiptSortKeys } from './receipt-list-query';
 import { SCOPE_CHAPTER, receiptScope } from './receipt-scope';
 import { StaleReceiptException } from './stale-receipt.exception';
 
@@ -63,19 +64,8 @@ export class ReceiptsService {
   async list(actor: Actor, query: ListReceiptsQuery): Promise<ReceiptPageDto> {
     const page = query.page ?? 1;
     const pageSize = query.pageSize ?? 25;
-    const where = within(receiptScope(actor), listFilters(query));
-    const direction = query.direction === 'asc' ? 'ASC' : 'DESC';
-    const order: Order =
-      query.sort === 'chapterName'
-        ? [
-            [{ model: Chapter, as: 'chapter' }, 'name', direction],
-            ['receivedOn', 'DESC'],
-            ['id', 'DESC'],
-          ]
-        : [
-            [query.sort === 'panelsAccepted' ? 'panelsAccepted' : 'receivedOn', direction],
-            ['id', direction],
-          ];
+    const where = within(receiptScope(actor), receiptListFilters(query));
+    const order = receiptListOrder(receiptSortKeys(query));
     const [rows, totals] = await Promise.all([
       this.receipts.findAll({
         where,
@@ -361,21 +351,6 @@ export class ReceiptsService {
       otherItems: Number(row?.otherItems ?? 0),
     };
   }
-}
-
-function listFilters(query: ListReceiptsQuery): WhereOptions {
-  const filters: WhereOptions[] = [];
-  if (query.from) filters.push({ receivedOn: { [Op.gte]: query.from } });
-  if (query.to) filters.push({ receivedOn: { [Op.lte]: query.to } });
-  if (query.regionId) filters.push({ '$chapter.region_id$': query.regionId });
-  if (query.chapterId) filters.push({ chapterId: query.chapterId });
-  if (query.campaignId) filters.push({ campaignId: query.campaignId });
-  if (query.hasScan !== undefined) {
-    const exists =
-      'EXISTS (SELECT 1 FROM receipt_scans s WHERE s.receipt_id = `ParcelReceipt`.`id`)';
-    filters.push(literal(query.hasScan ? exists : `NOT ${exists}`));
-  }
-  return { [Op.and]: filters };
 }
 
 /** JSON columns may come back parsed or as text, depending on the driver. */

@@ -3,6 +3,7 @@ import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import { col, fn, type Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { AuditService } from '../audit/audit.service';
+import { ViewCache } from '../cache/view-cache';
 import { Chapter } from '../chapters/models/chapter.model';
 import type { Actor } from '../common/access/actor';
 import { regionScope, within } from '../common/access/scope';
@@ -23,6 +24,7 @@ export class RegionsService {
     @InjectConnection() private readonly sequelize: Sequelize,
     @InjectModel(Region) private readonly regions: typeof Region,
     private readonly audit: AuditService,
+    private readonly views: ViewCache,
   ) {}
 
   /** The regions the person may see, by name, with their chapter counts. */
@@ -74,6 +76,8 @@ export class RegionsService {
       .catch((error: unknown) => {
         throw asTakenField(error, TAKEN);
       });
+    // Dashboards list every region by name: drop the cached ones.
+    await this.views.invalidate();
     return this.get(context.actor, region.id);
   }
 
@@ -101,6 +105,7 @@ export class RegionsService {
       .catch((error: unknown) => {
         throw asTakenField(error, TAKEN);
       });
+    await this.views.invalidate();
     return this.get(context.actor, id);
   }
 

@@ -7,6 +7,8 @@ import type { Readable } from 'node:stream';
  */
 export abstract class FileStorage {
   abstract put(content: Buffer): Promise<{ key: string }>;
+  /** Takes over a finished file (moved, never read into memory): exports of hundreds of MB. */
+  abstract putFile(path: string): Promise<{ key: string; sizeBytes: number }>;
   /** The stored bytes as a stream; rejects with StoredFileMissing when there is no such file. */
   abstract get(key: string): Promise<Readable>;
   /** Removes the file; a file already gone is not an error. */

@@ -1,5 +1,5 @@
 import { Injectable } from '@nestjs/common';
-import { mkdir, open, rename, rm, writeFile } from 'node:fs/promises';
+import { copyFile, mkdir, open, rename, rm, stat, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import type { Readable } from 'node:stream';
 import { AppConfig } from '../config/app-config';
@@ -22,6 +22,23 @@ export class LocalDiskStorage extends FileStorage {
     await writeFile(partial, content, { flag: 'wx', mode: 0o640 });
     await rename(partial, path);
     return { key };
+  }
+
+  async putFile(source: string): Promise<{ key: string; sizeBytes: number }> {
+    const key = newStorageKey();
+    const path = pathForKey(this.config.uploadsDir, key);
+    await mkdir(dirname(path), { recursive: true });
+    try {
+      await rename(source, path);
+    } catch (error) {
+      // Another file system (a temp folder on its own mount): copy aside, then rename.
+      if ((error as NodeJS.ErrnoException).code !== 'EXDEV') throw error;
+      const partial = `${path}.partial`;
+      await copyFile(source, partial);
+      await rename(partial, path);
+      await rm(source, { force: true });
+    }
+    return { key, sizeBytes: (await stat(path)).size };
   }
 
   async get(key: string): Promise<Readable> {

@@ -52,7 +52,7 @@ import { TallyRevisionsRepository } from './tally-revisions.repository';
     TallyCheckContextBuilder,
     TallyInScopeGuard,
   ],
-  // The tally models, for the reports that read approved revisions.
-  exports: [SequelizeModule],
+  // The tally models, for the reports that read approved revisions; the reader, for the exports.
+  exports: [SequelizeModule, TallyReader],
 })
 export class TalliesModule {}

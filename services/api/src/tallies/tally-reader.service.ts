@@ -15,13 +15,13 @@ import {
   type TallyDetail,
   type TallyPage,
   type TallyRevisionView,
+  type TallySummary,
 } from '@tallyloom/core';
-import { Op, literal, type Order, type WhereOptions } from 'sequelize';
+import { Op } from 'sequelize';
 import { PartnerAgency } from '../agencies/models/partner-agency.model';
 import { Chapter } from '../chapters/models/chapter.model';
 import type { Actor } from '../common/access/actor';
 import { chapterScope, within } from '../common/access/scope';
-import { Region } from '../regions/models/region.model';
 import { User } from '../users/models/user.model';
 import type { ListTalliesQuery } from './dto/list-tallies.query';
 import { MonthlyTally } from './models/monthly-tally.model';
@@ -40,13 +40,12 @@ import {
 } from './tally.mappers';
 import { TallyRevisionsRepository } from './tally-revisions.repository';
 import { tallyScope } from './tally-scope';
-
-const WITH_CHAPTER_AND_REGION = {
-  model: Chapter,
-  attributes: ['id', 'name', 'regionId', 'reportingDueDay'],
-  required: true,
-  include: [{ model: Region, attributes: ['id', 'name'] }],
-};
+import {
+  TALLY_LIST_INCLUDE,
+  tallyListFilters,
+  tallyListOrder,
+  tallySortKeys,
+} from './tally-list-query';
 
 /** How far back a chapter lead's home looks for months to file. */
 const CALENDAR_MONTHS_BACK = 12;
@@ -67,14 +66,22 @@ export class TallyReader {
   async list(actor: Actor, query: ListTalliesQuery): Promise<TallyPage> {
     const page = query.page ?? 1;
     const pageSize = query.pageSize ?? 25;
-    const where = within(tallyScope(actor), listFilters(query));
+    const where = within(tallyScope(actor), tallyListFilters(query));
     const { rows, count } = await this.tallies.findAndCountAll({
       where,
-      include: [WITH_CHAPTER_AND_REGION],
-      order: listOrder(query),
+      include: [TALLY_LIST_INCLUDE],
+      order: tallyListOrder(tallySortKeys(query)),
       limit: pageSize,
       offset: (page - 1) * pageSize,
     });
+    return { items: await this.summariesOf(rows), total: count, page, pageSize };
+  }
+
+  /**
+   * The list's rows as the list shows them (the tallies loaded with TALLY_LIST_INCLUDE): shared
+   * with the tallies export, so the file and the screen cannot disagree.
+   */
+  async summariesOf(rows: MonthlyTally[]): Promise<TallySummary[]> {
     const revisions = await this.revisions.findMany(
       rows.flatMap((tally) => [
         { tallyId: tally.id, revision: tally.currentRevision },
@@ -83,28 +90,24 @@ export class TallyReader {
           : []),
       ]),
     );
+    const byKey = new Map(revisions.map((r) => [`${r.tallyId}/${r.revision}`, r]));
     const revisionOf = (tallyId: number, revision: number | null) =>
-      revisions.find((r) => r.tallyId === tallyId && r.revision === revision) ?? null;
+      byKey.get(`${tallyId}/${revision}`) ?? null;
     const currents = rows.map((tally) => revisionOf(tally.id, tally.currentRevision)!);
     const [values, names] = await Promise.all([
       this.revisions.valuesOf(currents),
       this.namesOf(revisions.map((r) => r.approvedBy)),
     ]);
     const today = todayUtc();
-    return {
-      items: rows.map((tally, index) =>
-        toTallySummary(tally, {
-          current: currents[index],
-          approved: revisionOf(tally.id, tally.approvedRevision),
-          values: values.get(currents[index].id)!,
-          names,
-          today,
-        }),
-      ),
-      total: count,
-      page,
-      pageSize,
-    };
+    return rows.map((tally, index) =>
+      toTallySummary(tally, {
+        current: currents[index],
+        approved: revisionOf(tally.id, tally.approvedRevision),
+        values: values.get(currents[index].id)!,
+        names,
+        today,
+      }),
+    );
   }
 
   /** The tally with its values, checks as the server runs them, trail and allowed actions. */
@@ -230,7 +233,7 @@ export class TallyReader {
   async findInScope(actor: Actor, id: number): Promise<MonthlyTally> {
     const tally = await this.tallies.findOne({
       where: within(tallyScope(actor), { id }),
-      include: [WITH_CHAPTER_AND_REGION],
+      include: [TALLY_LIST_INCLUDE],
     });
     if (!tally) throw tallyNotFound();
     return tally;
@@ -279,48 +282,3 @@ export class TallyReader {
 
 const maxMonth = (a: MonthKey, b: MonthKey) => (a > b ? a : b);
 const minMonth = (a: MonthKey, b: MonthKey) => (a < b ? a : b);
-
-function listFilters(query: ListTalliesQuery): WhereOptions {
-  const filters: WhereOptions[] = [];
-  if (query.state) filters.push({ state: query.state });
-  if (query.regionId) filters.push({ '$chapter.region_id$': query.regionId });
-  if (query.chapterId) filters.push({ chapterId: query.chapterId });
-  if (query.month) filters.push({ month: monthStart(query.month) });
-  if (query.from) filters.push({ month: { [Op.gte]: monthStart(query.from) } });
-  if (query.to) filters.push({ month: { [Op.lte]: monthStart(query.to) } });
-  return { [Op.and]: filters };
-}
-
-function listOrder(query: ListTalliesQuery): Order {
-  const direction = query.direction === 'asc' ? 'ASC' : 'DESC';
-  switch (query.sort) {
-    case 'chapterName':
-      return [
-        [{ model: Chapter, as: 'chapter' }, 'name', direction],
-        ['month', 'DESC'],
-        ['id', 'DESC'],
-      ];
-    case 'state':
-      return [
-        ['state', direction],
-        ['month', 'DESC'],
-        ['id', 'DESC'],
-      ];
-    case 'submittedAt':
-      return [
-        [
-          literal(
-            '(SELECT r.submitted_at FROM tally_revisions r WHERE r.tally_id = `MonthlyTally`.`id` AND r.revision = `MonthlyTally`.`current_revision`)',
-          ),
-          direction,
-        ],
-        ['id', direction],
-      ];
-    default:
-      return [
-        ['month', direction],
-        [{ model: Chapter, as: 'chapter' }, 'name', 'ASC'],
-        ['id', direction],
-      ];
-  }
-}

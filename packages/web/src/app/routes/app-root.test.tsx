@@ -73,6 +73,8 @@ describe('navigation by role', () => {
       'Parcels',
       'Monthly tallies',
       'Review',
+      'Impact pack',
+      'Exports',
       'System status',
       'Jobs',
       'People',
@@ -89,6 +91,8 @@ describe('navigation by role', () => {
       'Parcels',
       'Monthly tallies',
       'Review',
+      'Impact pack',
+      'Exports',
       'System status',
       'Jobs',
     ]);
@@ -101,6 +105,7 @@ describe('navigation by role', () => {
       'Dashboard',
       'Campaigns',
       'Parcels',
+      'Exports',
     ]);
   });
 
@@ -112,14 +117,17 @@ describe('navigation by role', () => {
       'Parcels',
       'Monthly tallies',
       'Review',
+      'Exports',
     ]);
   });
 
-  it('does not show System status, parcels or Network set-up to a grant writer', async () => {
+  it('gives a grant writer the impact pack first, and neither System status, parcels nor Network set-up', async () => {
     expect(await navigationLinks(demoPeople.grantWriter)).toEqual([
+      'Impact pack',
       'Network',
       'Dashboard',
       'Campaigns',
+      'Exports',
     ]);
   });
 

@@ -1,9 +1,11 @@
 import {
+  ArrowDownload20Regular,
   BoxMultiple20Regular,
   CalendarLtr20Regular,
   ChartMultiple20Regular,
   ClipboardTaskListLtr20Regular,
   DataUsage20Regular,
+  DocumentTable20Regular,
   Home20Regular,
   MailInbox20Regular,
   People20Regular,
@@ -70,6 +72,20 @@ const navItems: NavEntry[] = [
     to: paths.tallyReview.getHref(),
     icon: ClipboardTaskListLtr20Regular,
     access: routeAccess.tallyReview,
+  },
+  {
+    label: routeAccess.impactPack.name,
+    to: paths.impactPack.getHref(),
+    icon: DocumentTable20Regular,
+    access: routeAccess.impactPack,
+    firstFor: ['grant_writer'],
+  },
+  {
+    // Short in the navigation; the page says whose they are.
+    label: 'Exports',
+    to: paths.exports.getHref(),
+    icon: ArrowDownload20Regular,
+    access: routeAccess.exports,
   },
   {
     label: routeAccess.status.name,

@@ -1,9 +1,10 @@
 import { Add20Regular, TableArrowUp20Regular } from '@fluentui/react-icons';
-import { can } from '@tallyloom/core';
+import { can, type ReceiptListParams } from '@tallyloom/core';
 import { useMemo } from 'react';
 import { LinkButton } from '@/components/ui/link-button';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
+import { ExportMenu } from '@/features/exports/components/export-menu';
 import { useChapters } from '@/features/network/api/get-chapters';
 import { useRegions } from '@/features/network/api/get-regions';
 import { useCampaigns } from '@/features/receipts/api/get-campaigns';
@@ -50,6 +51,20 @@ function parseQuery(params: URLSearchParams): ReceiptsQuery {
   };
 }
 
+/** What the list shows, every page of it: the filters and order the list asks the server for. */
+function exportFilters(query: ReceiptsQuery): ReceiptListParams {
+  return {
+    from: query.from || undefined,
+    to: query.to || undefined,
+    regionId: query.regionId,
+    chapterId: query.chapterId,
+    campaignId: query.campaignId,
+    hasScan: query.hasScan ? true : undefined,
+    sort: query.sort,
+    direction: query.direction,
+  };
+}
+
 function toSearchParams(query: ReceiptsQuery): URLSearchParams {
   const params = new URLSearchParams();
   if (query.page > 1) params.set('page', String(query.page));
@@ -87,8 +102,12 @@ export function ReceiptsRoute() {
     [regions.data, chapters.data, campaigns.data],
   );
 
+  const exportMenu = (
+    <ExportMenu target={{ table: 'receipts', filters: exportFilters(query) }} what="parcels" />
+  );
   const logButton = (
     <>
+      {exportMenu}
       <LinkButton to={paths.receiptImport.getHref()} icon={<TableArrowUp20Regular />}>
         Import a sheet
       </LinkButton>
@@ -103,7 +122,7 @@ export function ReceiptsRoute() {
       <PageHeader
         title="Parcels"
         description="Every parcel of panels and finished items logged by the chapters you can see."
-        actions={mayLog ? logButton : undefined}
+        actions={mayLog ? logButton : exportMenu}
       />
       <ReceiptsList
         query={query}

@@ -4,6 +4,7 @@ import { useSearchParams } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorState } from '@/components/ui/error-state';
 import { PageHeader } from '@/components/ui/page-header';
+import { ExportMenu } from '@/features/exports/components/export-menu';
 import { useChapters } from '@/features/network/api/get-chapters';
 import { TallyCalendar } from '@/features/tallies/components/tally-calendar';
 import { useSessionUser } from '@/lib/session/use-session';
@@ -76,6 +77,11 @@ function ChapterPicker() {
 export function TalliesRoute() {
   const user = useSessionUser();
   const ownChapter = user && ROLE_SCOPE[user.role] === 'chapter';
+  const [searchParams] = useSearchParams();
+  // The months on screen are one chapter's: the export holds that chapter's filed tallies.
+  const chapterId = ownChapter
+    ? (user.chapterId ?? undefined)
+    : parseChapterId(searchParams.get(chapterParam));
   return (
     <>
       <PageHeader
@@ -84,6 +90,14 @@ export function TalliesRoute() {
           ownChapter && user.chapterName
             ? `${user.chapterName}: each month's panels, blankets and people served, filed by the due day of the following month.`
             : "Each chapter's monthly figures, filed by the due day of the following month."
+        }
+        actions={
+          chapterId === undefined ? undefined : (
+            <ExportMenu
+              target={{ table: 'tallies', filters: { chapterId } }}
+              what="monthly tallies"
+            />
+          )
         }
       />
       {ownChapter ? (

@@ -1,12 +1,43 @@
-import type { SnapshotView } from '@tallyloom/core';
+import { makeStyles, tokens } from '@fluentui/react-components';
+import type { DashboardParams, SnapshotExportParams, SnapshotView } from '@tallyloom/core';
 import { createColumnHelper } from '@tanstack/react-table';
 import { useMemo } from 'react';
+import { useMatch } from 'react-router-dom';
 import { DataTable } from '@/components/ui/data-table';
 import { NumberCell } from '@/components/ui/number-cell';
 import { RouterLink } from '@/components/ui/router-link';
+import { paths } from '@/config/paths';
+import { ExportMenu } from '@/features/exports/components/export-menu';
 import { KPI_MEASURES, MEASURE_LABELS } from './measures';
 
 const column = createColumnHelper<SnapshotView>();
+
+const useStyles = makeStyles({
+  header: {
+    display: 'flex',
+    justifyContent: 'flex-end',
+    marginBottom: tokens.spacingVerticalS,
+  },
+});
+
+/**
+ * The export of these rows: the dashboard's scope (the network above regions, the region whose
+ * page this is above chapters) and the period the rows are for.
+ */
+function useSnapshotExport(breakdown: SnapshotView[]): SnapshotExportParams | undefined {
+  const regionPage = useMatch(paths.dashboardRegion.path);
+  const first = breakdown[0];
+  if (!first) return undefined;
+  const { period } = first;
+  const periodParams: DashboardParams =
+    period.kind === 'custom'
+      ? { periodKind: 'custom', from: period.from, to: period.to }
+      : { periodKind: period.kind, period: period.key };
+  if (first.scope === 'region') return { scope: 'network', ...periodParams };
+  const regionId = Number(regionPage?.params.id);
+  if (first.scope !== 'chapter' || !Number.isInteger(regionId)) return undefined;
+  return { scope: 'region', scopeId: regionId, ...periodParams };
+}
 
 export interface BreakdownTableProps {
   breakdown: SnapshotView[];
@@ -18,6 +49,8 @@ export interface BreakdownTableProps {
 
 /** The comparison as figures, each name a link to its own dashboard. */
 export function BreakdownTable({ breakdown, nameHeader, labelledBy, hrefOf }: BreakdownTableProps) {
+  const styles = useStyles();
+  const exportFilters = useSnapshotExport(breakdown);
   const columns = useMemo(
     () => [
       column.accessor('scopeName', {
@@ -47,11 +80,21 @@ export function BreakdownTable({ breakdown, nameHeader, labelledBy, hrefOf }: Br
     [nameHeader, hrefOf],
   );
   return (
-    <DataTable
-      data={breakdown}
-      columns={columns}
-      labelledBy={labelledBy}
-      getRowId={(row) => String(row.scopeId)}
-    />
+    <>
+      {exportFilters ? (
+        <div className={styles.header}>
+          <ExportMenu
+            target={{ table: 'snapshots', filters: exportFilters }}
+            what={`the ${nameHeader.toLowerCase()} comparison`}
+          />
+        </div>
+      ) : null}
+      <DataTable
+        data={breakdown}
+        columns={columns}
+        labelledBy={labelledBy}
+        getRowId={(row) => String(row.scopeId)}
+      />
+    </>
   );
 }
