@@ -6,6 +6,7 @@ import { createParcelReceipts } from './20261201-0004-create-parcel-receipts';
 import { createMonthlyTallies } from './20261202-0005-create-monthly-tallies';
 import { createReportSnapshots } from './20261202-0006-create-report-snapshots';
 import { createExports } from './20261202-0007-create-exports';
+import { createAuditSamples } from './20261202-0008-create-audit-samples';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
 export const MIGRATIONS: Migration[] = [
@@ -16,4 +17,5 @@ export const MIGRATIONS: Migration[] = [
   createMonthlyTallies,
   createReportSnapshots,
   createExports,
+  createAuditSamples,
 ];

@@ -156,6 +156,18 @@ describe('every route × every role × in and out of scope', () => {
     params['/api/exports/:id/file'] = someoneElsesExport;
     // The campaign dashboards scope campaigns exactly as the campaigns routes do.
     params['/api/dashboards/campaigns/:id'] = params['/api/campaigns/:id'];
+    // Audit samples are network-wide: admins and auditors read them, auditors alone write, and no
+    // scoped role reaches them. An unknown sample stands in for both (a 404 to those admitted).
+    const noSuchSample = '987654321';
+    params['/api/samples/:id'] = { inScope: noSuchSample, outOfScope: noSuchSample };
+    params['/api/samples/:id/items/:itemId'] = {
+      inScope: `${noSuchSample}/items/1?`,
+      outOfScope: `${noSuchSample}/items/1?`,
+    };
+    params['/api/samples/:id/items/:itemId/attachment'] = {
+      inScope: `${noSuchSample}/items/1/attachment?`,
+      outOfScope: `${noSuchSample}/items/1/attachment?`,
+    };
   });
   afterAll(() => testApp.close());
 

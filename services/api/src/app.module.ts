@@ -26,6 +26,7 @@ import { JobsAdminModule } from './jobs/jobs-admin.module';
 import { RemindersModule } from './reminders/reminders.module';
 import { ExportsModule } from './exports/exports.module';
 import { ImpactPackModule } from './impact-pack/impact-pack.module';
+import { AuditSamplingModule } from './audit-sampling/audit-sampling.module';
 
 export interface AppModuleOptions {
   /** `npm run worker`: job processors always on, whatever JOB_PROCESSORS says, and no web app. */
@@ -89,6 +90,7 @@ export class AppModule {
         RemindersModule,
         ExportsModule,
         ImpactPackModule,
+        AuditSamplingModule,
         ...(processors ? PROCESSOR_MODULES : []),
       ],
     };

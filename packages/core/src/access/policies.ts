@@ -56,6 +56,11 @@ export const POLICIES = {
   'outbox.read': ['network_admin'],
   /** Read the audit log. */
   'audit.read': ['network_admin', 'auditor'],
+  /**
+   * Plan and draw audit samples and record their worksheets: the auditor's only writes (BRIEF §2,
+   * "read-only" everywhere else).
+   */
+  'audit.sample': ['auditor'],
   /** See the system status page (database, queues). */
   'system.read': ['network_admin', 'national_staff'],
 } as const satisfies Record<string, readonly Role[]>;

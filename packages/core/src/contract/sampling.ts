@@ -2,6 +2,7 @@
 import type { SamplingConfidence, SampleSizeResult } from '../sampling/sample-size';
 import type { SampleEvaluation } from '../sampling/upper-deviation-limit';
 import type { SnapshotScope } from './reports';
+import type { Page } from './users';
 
 export const SAMPLE_POPULATION_KINDS = ['parcel-receipts', 'tallies'] as const;
 export type SamplePopulationKind = (typeof SAMPLE_POPULATION_KINDS)[number];
@@ -86,3 +87,24 @@ export interface WorksheetResultView {
   /** Null while items are still unrecorded. */
   evaluation: SampleEvaluation | null;
 }
+
+/** One row of GET /api/samples: a sample without its items, newest first. */
+export interface AuditSampleSummaryView {
+  id: number;
+  plan: SamplePlanView;
+  seed: string;
+  prng: string;
+  /** Items drawn. */
+  itemCount: number;
+  drawnAt: string;
+  drawnBy: string;
+  worksheet: WorksheetResultView;
+}
+
+/** GET /api/samples?page=&pageSize= */
+export interface ListSamplesParams {
+  page?: number;
+  pageSize?: number;
+}
+
+export type AuditSamplePage = Page<AuditSampleSummaryView>;
