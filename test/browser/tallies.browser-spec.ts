@@ -107,7 +107,7 @@ describe('monthly tallies: file, return, fix, approve and amend', () => {
     const checks = page.getByRole('complementary', { name: 'Checks' });
     await checks
       .getByRole('region', { name: /^Warnings/ })
-      .getByText(/people served/i)
+      .getByText(/reported as served, but no blankets were given out/i)
       .first()
       .waitFor();
     expect(await checks.getByRole('region', { name: /^Errors/ }).count()).toBe(0);

@@ -47,7 +47,11 @@ export async function openWatchedPage(browser: Browser, baseUrl: string): Promis
     );
     if (!local) problems.push(`off-site request: ${req.url()}`);
   });
-  page.on('requestfailed', (req) => problems.push(`request failed: ${req.url()}`));
+  page.on('requestfailed', (req) => {
+    // Aborted means cancelled on purpose (a superseded list query, a page left): not a failure.
+    if (req.failure()?.errorText === 'net::ERR_ABORTED') return;
+    problems.push(`request failed: ${req.url()} (${req.failure()?.errorText ?? 'no reason'})`);
+  });
   return { context, page, problems };
 }
 
