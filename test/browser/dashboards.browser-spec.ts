@@ -1,8 +1,8 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { openWatchedPage, screenshot, type WatchedPage } from './support/browser';
-import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
-import { signInThroughForm, unexpected } from './support/sign-in';
+import { screenshot } from './support/browser';
+import { servedAppSuite } from './support/served-app';
+import { signInThroughForm } from './support/sign-in';
 
 const staff = DEMO_SIGN_INS.find((person) => person.role === 'national_staff')!;
 const lead = DEMO_SIGN_INS.find((person) => person.role === 'chapter_lead')!;
@@ -26,23 +26,10 @@ async function figuresShown(page: Page): Promise<void> {
 }
 
 describe('dashboards: staff read the network, a chapter lead reads their chapter', () => {
-  let served: ServedApp | undefined;
-  let browser: Browser;
-  let baseUrl: string;
-  const pages: WatchedPage[] = [];
-
-  beforeAll(async () => {
-    served = await startServedApp();
-    ({ browser, baseUrl } = served);
-  });
-  afterAll(() => stopServedApp(served));
-  afterEach(() => {
-    for (const { problems } of pages.splice(0)) expect(unexpected(problems)).toEqual([]);
-  });
+  const suite = servedAppSuite();
 
   it('staff open the network dashboard, change the period and drill down to a region', async () => {
-    const watched = await openWatchedPage(browser, baseUrl);
-    pages.push(watched);
+    const watched = await suite.open();
     const { page } = watched;
     await page.goto('/dashboard');
     await signInThroughForm(page, staff.email, staff.password);
@@ -67,8 +54,7 @@ describe('dashboards: staff read the network, a chapter lead reads their chapter
   });
 
   it('a chapter lead sees their own chapter, and only that', async () => {
-    const watched = await openWatchedPage(browser, baseUrl);
-    pages.push(watched);
+    const watched = await suite.open();
     const { page } = watched;
     await page.goto('/dashboard');
     await signInThroughForm(page, lead.email, lead.password);

@@ -1,12 +1,12 @@
 import { headlineRows } from '@tallyloom/reports';
 import type { DashboardView, ReceiptPage } from '@tallyloom/core';
-import type { Browser, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import * as XLSX from 'xlsx';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
 import { signIn } from '../e2e/support/people-builders';
-import { openWatchedPage, screenshot, type WatchedPage } from './support/browser';
-import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
-import { signInThroughForm, unexpected } from './support/sign-in';
+import { screenshot } from './support/browser';
+import { servedAppSuite } from './support/served-app';
+import { signInThroughForm } from './support/sign-in';
 
 const grantWriter = DEMO_SIGN_INS.find((person) => person.role === 'grant_writer')!;
 const staff = DEMO_SIGN_INS.find((person) => person.role === 'national_staff')!;
@@ -54,24 +54,12 @@ async function downloadFromDialog(page: Page, dialogName: string, shot: string) 
 }
 
 describe('exports: the impact pack and a filtered parcels table, downloaded and read back', () => {
-  let served: ServedApp | undefined;
-  let browser: Browser;
-  let baseUrl: string;
-  const pages: WatchedPage[] = [];
-
-  beforeAll(async () => {
-    served = await startServedApp();
-    ({ browser, baseUrl } = served);
-  });
-  afterAll(() => stopServedApp(served));
-  afterEach(() => {
-    for (const { problems } of pages.splice(0)) expect(unexpected(problems)).toEqual([]);
-  });
+  const suite = servedAppSuite();
 
   /** The API's own network figures for the year, once the snapshot job has built them. */
   async function networkFigures(token: string): Promise<DashboardView> {
     for (let attempt = 0; attempt < 60; attempt++) {
-      const response = await served!.testApp
+      const response = await suite.app.testApp
         .http()
         .get('/api/dashboards/network')
         .query({ periodKind: 'fiscal_year', period: FISCAL_YEAR })
@@ -85,11 +73,10 @@ describe('exports: the impact pack and a filtered parcels table, downloaded and 
   }
 
   it('a grant writer builds the network impact pack for a fiscal year and its figures match the dashboard', async () => {
-    const { token } = await signIn(served!.testApp, grantWriter.email, grantWriter.password);
+    const { token } = await signIn(suite.app.testApp, grantWriter.email, grantWriter.password);
     const dashboard = await networkFigures(token);
 
-    const watched = await openWatchedPage(browser, baseUrl);
-    pages.push(watched);
+    const watched = await suite.open();
     const { page } = watched;
     await page.goto('/impact-pack');
     await signInThroughForm(page, grantWriter.email, grantWriter.password);
@@ -119,9 +106,8 @@ describe('exports: the impact pack and a filtered parcels table, downloaded and 
   });
 
   it('national staff export the parcels of a region and a month, and the file holds what the list totals', async () => {
-    const { token } = await signIn(served!.testApp, staff.email, staff.password);
-    const watched = await openWatchedPage(browser, baseUrl);
-    pages.push(watched);
+    const { token } = await signIn(suite.app.testApp, staff.email, staff.password);
+    const watched = await suite.open();
     const { page } = watched;
     await page.goto('/receipts');
     await signInThroughForm(page, staff.email, staff.password);
@@ -136,7 +122,7 @@ describe('exports: the impact pack and a filtered parcels table, downloaded and 
     const regionId = Number(new URL(page.url()).searchParams.get('region'));
 
     // The list's totals for these filters, from the API the list reads.
-    const list = await served!.testApp
+    const list = await suite.app.testApp
       .http()
       .get('/api/receipts')
       .query({ regionId, from: MONTH.from, to: MONTH.to, page: 1, pageSize: 1 })

@@ -1,10 +1,10 @@
 import { format, subMonths } from 'date-fns';
-import type { Browser, Locator, Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import { QueryTypes, Sequelize } from 'sequelize';
 import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
-import { openWatchedPage, screenshot, type WatchedPage } from './support/browser';
-import { startServedApp, stopServedApp, type ServedApp } from './support/served-app';
-import { signInThroughForm, unexpected } from './support/sign-in';
+import { screenshot, type WatchedPage } from './support/browser';
+import { servedAppSuite } from './support/served-app';
+import { signInThroughForm } from './support/sign-in';
 
 const lead = DEMO_SIGN_INS.find((person) => person.role === 'chapter_lead')!;
 const coordinator = DEMO_SIGN_INS.find((person) => person.role === 'regional_coordinator')!;
@@ -41,38 +41,19 @@ async function submitTally(page: Page, note: string): Promise<void> {
   await gone;
 }
 
-async function as(
-  browser: Browser,
-  baseUrl: string,
-  path: string,
-  email: string,
-  password: string,
-) {
-  const watched = await openWatchedPage(browser, baseUrl);
+async function as(opened: Promise<WatchedPage>, path: string, email: string, password: string) {
+  const watched = await opened;
   await watched.page.goto(path);
   await signInThroughForm(watched.page, email, password);
   return watched;
 }
 
 describe('monthly tallies: file, return, fix, approve and amend', () => {
-  let served: ServedApp | undefined;
-  let browser: Browser;
-  let baseUrl: string;
-  const pages: WatchedPage[] = [];
-
-  beforeAll(async () => {
-    served = await startServedApp();
-    ({ browser, baseUrl } = served);
-  });
-  afterAll(() => stopServedApp(served));
-  afterEach(() => {
-    for (const { problems } of pages.splice(0)) expect(unexpected(problems)).toEqual([]);
-  });
+  const suite = servedAppSuite();
 
   it('takes one month through the whole review flow', async () => {
     // 1. The chapter lead starts last month's tally and files it with a warning.
-    const leadView = await as(browser, baseUrl, '/tallies', lead.email, lead.password);
-    pages.push(leadView);
+    const leadView = await as(suite.open(), '/tallies', lead.email, lead.password);
     const page = leadView.page;
     await page.getByRole('heading', { name: 'Monthly tallies', level: 1 }).waitFor();
     await page.getByRole('button', { name: `Start the ${lastMonth} tally` }).click();
@@ -117,14 +98,7 @@ describe('monthly tallies: file, return, fix, approve and amend', () => {
     await page.getByText('Submitted', { exact: true }).first().waitFor();
 
     // 2. The region's coordinator returns it with a comment.
-    const reviewView = await as(
-      browser,
-      baseUrl,
-      '/review',
-      coordinator.email,
-      coordinator.password,
-    );
-    pages.push(reviewView);
+    const reviewView = await as(suite.open(), '/review', coordinator.email, coordinator.password);
     const review = reviewView.page;
     await review.getByRole('heading', { name: 'Review tallies', level: 1 }).waitFor();
     await review.getByRole('link', { name: 'Alder Falls' }).first().click();

@@ -168,6 +168,11 @@ describe('every route × every role × in and out of scope', () => {
       inScope: `${noSuchSample}/items/1/attachment?`,
       outOfScope: `${noSuchSample}/items/1/attachment?`,
     };
+    // A trace reference names its scope: a month of the home chapter, and of the away one.
+    params['/api/trace/:reference'] = {
+      inScope: `chapter:${home.chapters[0].id}:2024-01`,
+      outOfScope: `chapter:${away.chapters[0].id}:2024-01`,
+    };
   });
   afterAll(() => testApp.close());
 

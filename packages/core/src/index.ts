@@ -46,6 +46,7 @@ export * from './reporting/compliance';
 export * from './reporting/change';
 export * from './reporting/snapshot-math';
 export * from './contract/sampling';
+export * from './contract/trace';
 export * from './sampling/distributions';
 export * from './sampling/sample-size';
 export * from './sampling/upper-deviation-limit';

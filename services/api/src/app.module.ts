@@ -27,6 +27,7 @@ import { RemindersModule } from './reminders/reminders.module';
 import { ExportsModule } from './exports/exports.module';
 import { ImpactPackModule } from './impact-pack/impact-pack.module';
 import { AuditSamplingModule } from './audit-sampling/audit-sampling.module';
+import { TraceModule } from './trace/trace.module';
 
 export interface AppModuleOptions {
   /** `npm run worker`: job processors always on, whatever JOB_PROCESSORS says, and no web app. */
@@ -91,6 +92,7 @@ export class AppModule {
         ExportsModule,
         ImpactPackModule,
         AuditSamplingModule,
+        TraceModule,
         ...(processors ? PROCESSOR_MODULES : []),
       ],
     };

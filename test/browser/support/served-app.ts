@@ -1,6 +1,7 @@
 import type { Browser } from 'playwright-core';
 import { startTestApp, WEB_DIST, type TestApp } from '../../e2e/support/test-app';
-import { launchBrowser } from './browser';
+import { launchBrowser, openWatchedPage, type WatchedPage } from './browser';
+import { unexpected } from './sign-in';
 
 export interface ServedApp {
   testApp: TestApp;
@@ -20,4 +21,37 @@ export async function startServedApp(): Promise<ServedApp> {
 export async function stopServedApp(served: ServedApp | undefined): Promise<void> {
   await served?.browser.close();
   await served?.testApp.close();
+}
+
+/**
+ * For a describe block: starts the served app before its tests and stops it after, and checks
+ * after each test that no page opened through `open()` logged anything unexpected.
+ */
+export function servedAppSuite(): {
+  readonly app: ServedApp;
+  open(): Promise<WatchedPage>;
+  watch(page: WatchedPage): WatchedPage;
+} {
+  let served: ServedApp | undefined;
+  const pages: WatchedPage[] = [];
+  beforeAll(async () => {
+    served = await startServedApp();
+  });
+  afterAll(() => stopServedApp(served));
+  afterEach(() => {
+    for (const { problems } of pages.splice(0)) expect(unexpected(problems)).toEqual([]);
+  });
+  return {
+    get app() {
+      if (!served) throw new Error('the served app is not started yet (use it inside a test)');
+      return served;
+    },
+    async open() {
+      return this.watch(await openWatchedPage(this.app.browser, this.app.baseUrl));
+    },
+    watch(page) {
+      pages.push(page);
+      return page;
+    },
+  };
 }

@@ -1,0 +1,93 @@
+import { Injectable, NotFoundException } from '@nestjs/common';
+import { InjectModel } from '@nestjs/sequelize';
+import {
+  can,
+  TRACE_MEASURES,
+  type SnapshotFigures,
+  type TraceReceipt,
+  type TraceView,
+} from '@tallyloom/core';
+import type { Actor } from '../common/access/actor';
+import { jsonColumn } from '../dashboards/snapshot-rows';
+import { ReportSnapshot } from '../reports/models/report-snapshot.model';
+import { SettingsService } from '../settings/settings.service';
+import type { TraceQuery } from './dto/trace.query';
+import { TraceAmendments } from './trace-amendments';
+import { TraceLines } from './trace-lines';
+import { pickMeasures, recomputeFigures, sameFigures } from './trace-math';
+import { chapterMonthKey, TraceReceipts } from './trace-receipts';
+import { traceTargetOf } from './trace-reference';
+import { TraceSubjects } from './trace-subject';
+
+/**
+ * The trace of a report figure: the stored snapshot row the dashboards read, the approved tally
+ * revisions it names, their amendments and parcel receipts, and the figure re-added from them.
+ */
+@Injectable()
+export class TraceService {
+  constructor(
+    @InjectModel(ReportSnapshot) private readonly snapshots: typeof ReportSnapshot,
+    private readonly settings: SettingsService,
+    private readonly subjects: TraceSubjects,
+    private readonly lines: TraceLines,
+    private readonly amendments: TraceAmendments,
+    private readonly receipts: TraceReceipts,
+  ) {}
+
+  async trace(actor: Actor, reference: string, query: TraceQuery): Promise<TraceView> {
+    const { fiscalYearStartMonth } = await this.settings.current();
+    const target = traceTargetOf(reference, fiscalYearStartMonth);
+    const subject = await this.subjects.resolve(actor, target);
+    const { period } = target;
+    const snapshot = await this.snapshots.findOne({
+      where: {
+        scope: subject.scope,
+        scopeId: subject.scopeId ?? 0,
+        periodKind: period.kind,
+        periodKey: period.key,
+      },
+    });
+    if (!snapshot) {
+      throw new NotFoundException(
+        `No report snapshot of ${subject.scopeName} for ${period.label} has been built.`,
+      );
+    }
+    const counted = await this.lines.read(
+      actor,
+      jsonColumn<Array<[number, number]>>(snapshot.sourceRevisions),
+    );
+    const [amendments, receipts] = await Promise.all([
+      this.amendments.of(counted),
+      // Every role that reads tallies reads receipts today; the check keeps the two apart.
+      can(actor.role, 'receipts.read')
+        ? this.receipts.of(actor, counted)
+        : new Map<string, TraceReceipt[]>(),
+    ]);
+    const measures = query.measure ? [query.measure] : TRACE_MEASURES;
+    const figure = pickMeasures(jsonColumn<SnapshotFigures>(snapshot.figures), measures);
+    const recomputed = pickMeasures(recomputeFigures(counted), measures);
+    return {
+      reference: target.reference,
+      ...subject,
+      period,
+      measure: query.measure ?? null,
+      figure,
+      recomputed,
+      agrees: sameFigures(figure, recomputed, measures),
+      asOf: snapshot.asOf.toISOString(),
+      tallies: counted.map((line) => ({
+        tallyId: line.tallyId,
+        chapterId: line.chapterId,
+        chapterName: line.chapterName,
+        regionName: line.regionName,
+        month: line.month,
+        revision: line.revision,
+        approvedBy: line.approvedBy,
+        approvedAt: line.approvedAt,
+        value: pickMeasures(line.figures, measures),
+        amendments: amendments.get(line.tallyId) ?? [],
+        receipts: receipts.get(chapterMonthKey(line.chapterId, line.month)) ?? [],
+      })),
+    };
+  }
+}
