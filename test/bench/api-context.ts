@@ -5,10 +5,11 @@ const DIST = '../../services/api/dist';
 
 /**
  * A Nest application context of the compiled API (tsx emits no decorator metadata, so the
- * benchmark loads `services/api/dist`), with job processors off: only what the bench calls runs.
+ * benchmark loads `services/api/dist`). Job processors are off unless a section needs one of
+ * their modules' providers (the export producers live beside the exports processor).
  */
-export async function apiContext(): Promise<INestApplicationContext> {
-  process.env.JOB_PROCESSORS = 'off';
+export async function apiContext({ processors = false } = {}): Promise<INestApplicationContext> {
+  process.env.JOB_PROCESSORS = processors ? 'in-process' : 'off';
   const { NestFactory } = await import('@nestjs/core');
   const { AppModule } = (await import(`${DIST}/app.module.js`)) as {
     AppModule: { forRoot(): DynamicModule };

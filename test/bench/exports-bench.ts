@@ -140,7 +140,7 @@ async function rangeFor(databaseUrl: string, rows: number): Promise<{ from: stri
 export async function benchExports(
   input: ExportsBenchInput,
 ): Promise<Array<Record<string, string | number>>> {
-  const context: INestApplicationContext = await apiContext();
+  const context: INestApplicationContext = await apiContext({ processors: true });
   try {
     const Producer = await apiExport<Type<ReceiptsProducerLike>>(
       'exports/producers/receipts-export.producer',
