@@ -175,10 +175,17 @@ export async function benchExports(
         step(`Export job: ${format}, about ${size.toLocaleString('en')} receipts…`);
         const job = await peakRssGrowth(() =>
           timed(() =>
-            producer.produce(
-              { format, bom: false, filters },
-              { actor, filePath, progress: () => Promise.resolve(), xlsxRowsPerSheet: 1_048_576 },
-            ),
+            producer
+              .produce(
+                { format, bom: false, filters },
+                { actor, filePath, progress: () => Promise.resolve(), xlsxRowsPerSheet: 1_048_576 },
+              )
+              .catch((error: Error & { parent?: { message?: string } }) => {
+                // Sequelize keeps the database's own words on `parent`.
+                throw new Error(
+                  `the ${format} export job failed: ${error.parent?.message ?? error.message}`,
+                );
+              }),
           ),
         );
         const written = job.value.value.rows;

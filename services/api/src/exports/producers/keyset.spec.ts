@@ -9,9 +9,15 @@ describe('after (keyset paging)', () => {
         { column: 'id', direction: 'ASC', value: 7 },
       ]),
     ).toEqual({
-      [Op.or]: [
-        { [Op.and]: [{ month: { [Op.lt]: '2026-03-01' } }] },
-        { [Op.and]: [{ month: { [Op.eq]: '2026-03-01' } }, { id: { [Op.gt]: 7 } }] },
+      // A plain bound on the first key first, so the database can read an index range.
+      [Op.and]: [
+        { month: { [Op.lte]: '2026-03-01' } },
+        {
+          [Op.or]: [
+            { [Op.and]: [{ month: { [Op.lt]: '2026-03-01' } }] },
+            { [Op.and]: [{ month: { [Op.eq]: '2026-03-01' } }, { id: { [Op.gt]: 7 } }] },
+          ],
+        },
       ],
     });
   });

@@ -17,13 +17,19 @@ export interface KeysetKey {
  */
 // Source: MariaDB Knowledge Base, "ORDER BY" (NULL values are treated as lower than any value).
 export function after(keys: KeysetKey[]): WhereOptions {
-  return {
+  const next = {
     [Op.or]: keys.flatMap((key, index) => {
       const beyond = beyondOf(key);
       if (beyond === null) return [];
       return [{ [Op.and]: [...keys.slice(0, index).map(equalTo), beyond] }];
     }),
   };
+  // The same rows, plus a plain bound on the first key that the optimizer can read as an index
+  // range; without it MariaDB may scan the whole table for each page of an OR condition.
+  const [first] = keys;
+  if (!first || first.nullable || first.value === null) return next;
+  const bound = first.direction === 'ASC' ? { [Op.gte]: first.value } : { [Op.lte]: first.value };
+  return { [Op.and]: [condition(first.column, bound), next] };
 }
 
 function condition(column: KeysetKey['column'], test: object): WhereOptions {
