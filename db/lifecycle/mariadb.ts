@@ -77,6 +77,10 @@ export async function startMariaDb(options: MariaDbOptions): Promise<RunningMari
     }
   }
 
+  // A temporary folder of its own: a MariaDB server removes the #sql* files it finds in its
+  // tmpdir when it starts, so servers sharing /tmp would delete each other's temporary tables.
+  const tmpDir = join(options.runDir, 'mariadb-tmp');
+  mkdirSync(tmpDir, { recursive: true });
   const logFd = openSync(join(options.runDir, 'mariadb.out'), 'a');
   const child = spawn(
     mariadbd,
@@ -88,6 +92,7 @@ export async function startMariaDb(options: MariaDbOptions): Promise<RunningMari
       `--socket=${socket}`,
       `--pid-file=${pidFile}`,
       `--log-error=${errorLog}`,
+      `--tmpdir=${tmpDir}`,
       '--user=root',
       '--character-set-server=utf8mb4',
       '--collation-server=utf8mb4_unicode_ci',
