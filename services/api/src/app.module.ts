@@ -67,6 +67,9 @@ export class AppModule {
             logging: false,
             timezone: '+00:00',
             pool: { max: 10, min: 0, idle: 10_000 },
+            // The driver gives up on a new connection after 1 s by default: too short on a
+            // busy machine, where it turned a slow moment into 500s.
+            dialectOptions: { connectTimeout: 10_000 },
           }),
         }),
         JobsModule,
