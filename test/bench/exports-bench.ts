@@ -197,7 +197,7 @@ export async function benchExports(
             ? exceljsAlone(floorPath, columns, written)
             : bareCsv(floorPath, columns, written),
         );
-        rows.push({
+        const row = {
           export: `${format}, ${written.toLocaleString('en')} rows`,
           'job ÷ floor': (job.value.ms / floor.ms).toFixed(2),
           target: '≤ 1.5',
@@ -206,7 +206,10 @@ export async function benchExports(
           'peak RSS growth MB': job.mb.toFixed(0),
           'RSS target': '≤ 150, flat',
           'file MB': (bytes / 1024 / 1024).toFixed(1),
-        });
+        };
+        // Printed as each finishes too: a 1 M-row run is long, and a later failure keeps these.
+        step(`  ${JSON.stringify(row)}`);
+        rows.push(row);
         await rm(filePath, { force: true });
         await rm(floorPath, { force: true });
       }
