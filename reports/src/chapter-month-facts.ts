@@ -52,19 +52,16 @@ const lineSum = (table: string, condition = ''): string =>
   `(SELECT COALESCE(SUM(l.count), 0) FROM ${table} l WHERE l.revision_id = r.id${condition})`;
 
 /**
- * One SELECT yielding one row per approved chapter-month: chapter_id, region_id, month
- * ('YYYY-MM'), tally_id, revision and every measure's fact column. Line tables are summed in
- * sub-selects, so a revision with many lines still gives exactly one row.
+ * Every measure's fact column of the revision aliased `r` (line tables summed in sub-selects),
+ * as `factFromRow` reads them. Shared by the snapshot facts and the trace, so a traced line adds
+ * exactly what the snapshot builder added.
  */
-export function chapterMonthFactsSql(filter: FactsFilter = {}): SqlQuery {
-  const { where, replacements } = filterClauses(filter, 't');
+export function factColumnsSql(): string {
   const people = PEOPLE_GROUPS.map(
     (group) =>
       `${lineSum('tally_people_served', ` AND l.people_group = '${group}'`)} AS ${PEOPLE_GROUP_COLUMNS[group]}`,
   );
-  const sql = [
-    'SELECT t.chapter_id, c.region_id, DATE_FORMAT(t.month, :monthFormat) AS month,',
-    '  t.id AS tally_id, r.revision,',
+  return [
     '  r.panels_accepted,',
     '  r.set_aside_off_size + r.set_aside_hard_care + r.set_aside_soiled + r.set_aside_other AS panels_set_aside,',
     '  r.panels_used,',
@@ -76,6 +73,20 @@ export function chapterMonthFactsSql(filter: FactsFilter = {}): SqlQuery {
     '  r.volunteer_hours,',
     '  COALESCE(r.yarn_kg, 0) AS yarn_kg,',
     '  r.panels_closing, r.blankets_closing',
+  ].join('\n');
+}
+
+/**
+ * One SELECT yielding one row per approved chapter-month: chapter_id, region_id, month
+ * ('YYYY-MM'), tally_id, revision and every measure's fact column. Line tables are summed in
+ * sub-selects, so a revision with many lines still gives exactly one row.
+ */
+export function chapterMonthFactsSql(filter: FactsFilter = {}): SqlQuery {
+  const { where, replacements } = filterClauses(filter, 't');
+  const sql = [
+    'SELECT t.chapter_id, c.region_id, DATE_FORMAT(t.month, :monthFormat) AS month,',
+    '  t.id AS tally_id, r.revision,',
+    factColumnsSql(),
     'FROM monthly_tallies t',
     'JOIN chapters c ON c.id = t.chapter_id',
     // The approved revision only: an amendment in progress leaves it in force.

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import { PEOPLE_GROUPS, type SnapshotFigures, type TraceTallyLine } from '@tallyloom/core';
-import { factFromRow, PEOPLE_GROUP_COLUMNS } from '@tallyloom/reports';
+import type { SnapshotFigures, TraceTallyLine } from '@tallyloom/core';
+import { factColumnsSql, factFromRow } from '@tallyloom/reports';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { Actor } from '../common/access/actor';
@@ -15,10 +15,6 @@ export type CountedRevision = Omit<TraceTallyLine, 'value' | 'amendments' | 'rec
   figures: SnapshotFigures;
 };
 
-/** A line table summed per revision in a correlated sub-select: one value per row, no fan-out. */
-const lineSum = (table: string, condition = ''): string =>
-  `(SELECT COALESCE(SUM(l.count), 0) FROM ${table} l WHERE l.revision_id = r.id${condition})`;
-
 /**
  * The figures of named revisions, in the fact columns of reports' chapterMonthFactsSql (read with
  * its factFromRow), so a line adds exactly what the snapshot builder added. The builder's SQL
@@ -26,25 +22,11 @@ const lineSum = (table: string, condition = ''): string =>
  * which differ when an amendment was approved after the snapshot was built.
  */
 function countedRevisionsSql(): string {
-  const people = PEOPLE_GROUPS.map(
-    (group) =>
-      `${lineSum('tally_people_served', ` AND l.people_group = '${group}'`)} AS ${PEOPLE_GROUP_COLUMNS[group]}`,
-  );
   return [
     'SELECT t.chapter_id, c.region_id, DATE_FORMAT(t.month, :monthFormat) AS month,',
     '  t.id AS tally_id, r.revision, c.name AS chapter_name, g.name AS region_name,',
     '  u.display_name AS approved_by_name, r.approved_at,',
-    '  r.panels_accepted,',
-    '  r.set_aside_off_size + r.set_aside_hard_care + r.set_aside_soiled + r.set_aside_other AS panels_set_aside,',
-    '  r.panels_used,',
-    `  ${lineSum('tally_blankets_assembled')} AS blankets_assembled,`,
-    '  r.blankets_received,',
-    `  ${lineSum('tally_blankets_given')} AS blankets_given,`,
-    `  ${lineSum('tally_people_served')} AS people_served,`,
-    ...people.map((column) => `  ${column},`),
-    '  r.volunteer_hours,',
-    '  COALESCE(r.yarn_kg, 0) AS yarn_kg,',
-    '  r.panels_closing, r.blankets_closing',
+    factColumnsSql(),
     'FROM tally_revisions r',
     'JOIN monthly_tallies t ON t.id = r.tally_id',
     'JOIN chapters c ON c.id = t.chapter_id',
