@@ -43,6 +43,22 @@ export interface SnapshotFigures {
   approvedTallies: number;
 }
 
+/** Every single-number measure of SnapshotFigures (people by group is a breakdown of one). */
+export const SNAPSHOT_MEASURES = [
+  'panelsAccepted',
+  'panelsSetAside',
+  'panelsUsed',
+  'blanketsAssembled',
+  'blanketsReceived',
+  'blanketsGiven',
+  'peopleServed',
+  'volunteerHours',
+  'yarnKg',
+  'panelsInStock',
+  'blanketsInStock',
+  'approvedTallies',
+] as const satisfies ReadonlyArray<keyof SnapshotFigures>;
+
 /** Reporting compliance of the chapter-months in scope and period. */
 export interface ComplianceFigures {
   expected: number;

@@ -1,22 +1,9 @@
 /** The trace of a report figure down to its tallies, receipts and scans (BRIEF §3 "Trace"; issue #8). */
 import type { TallyValueChange } from '../tallies/revision-diff';
-import type { Period, SnapshotFigures, SnapshotScope } from './reports';
+import { SNAPSHOT_MEASURES, type Period, type SnapshotScope } from './reports';
 
 /** The snapshot measures a trace re-adds: every single number of SnapshotFigures. */
-export const TRACE_MEASURES = [
-  'panelsAccepted',
-  'panelsSetAside',
-  'panelsUsed',
-  'blanketsAssembled',
-  'blanketsReceived',
-  'blanketsGiven',
-  'peopleServed',
-  'volunteerHours',
-  'yarnKg',
-  'panelsInStock',
-  'blanketsInStock',
-  'approvedTallies',
-] as const satisfies ReadonlyArray<keyof SnapshotFigures>;
+export const TRACE_MEASURES = SNAPSHOT_MEASURES;
 export type TraceMeasure = (typeof TRACE_MEASURES)[number];
 
 /** Values by measure: the traced measure only, or every measure when none was asked for. */

@@ -1,4 +1,4 @@
-import type { SnapshotFigures } from '../contract/reports';
+import { SNAPSHOT_MEASURES, type SnapshotFigures } from '../contract/reports';
 import { PEOPLE_GROUPS, type PeopleGroup } from '../contract/tallies';
 
 // Combining snapshot figures. Two different roll-ups:
@@ -12,18 +12,10 @@ type FlowMeasure = Exclude<
   'peopleServedByGroup' | 'panelsInStock' | 'blanketsInStock'
 >;
 
-const FLOW_MEASURES: readonly FlowMeasure[] = [
-  'panelsAccepted',
-  'panelsSetAside',
-  'panelsUsed',
-  'blanketsAssembled',
-  'blanketsReceived',
-  'blanketsGiven',
-  'peopleServed',
-  'volunteerHours',
-  'yarnKg',
-  'approvedTallies',
-];
+// Stock is a level, not a flow: every other single-number measure sums over time.
+const FLOW_MEASURES = SNAPSHOT_MEASURES.filter(
+  (measure): measure is FlowMeasure => measure !== 'panelsInStock' && measure !== 'blanketsInStock',
+);
 
 function emptyGroups(): Record<PeopleGroup, number> {
   return Object.fromEntries(PEOPLE_GROUPS.map((group) => [group, 0])) as Record<
