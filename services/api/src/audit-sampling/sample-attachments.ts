@@ -1,7 +1,6 @@
 import { BadRequestException, Injectable, UnsupportedMediaTypeException } from '@nestjs/common';
-import { fromBuffer } from 'file-type';
 import { createHash } from 'node:crypto';
-import { cleanDisplayName, SCAN_MEDIA_TYPES } from '../receipts/scan-files';
+import { cleanDisplayName, scanTypeOf } from '../receipts/scan-files';
 import { FileStorage } from '../storage/file-storage';
 
 /** A worksheet attachment put into FileStorage, with what serving it later needs. */
@@ -29,20 +28,19 @@ export class SampleAttachments {
         fields: [{ field: 'attachment', messages: [message] }],
       });
     }
-    const detected = await fromBuffer(file.buffer);
-    const extension = detected ? SCAN_MEDIA_TYPES[detected.mime] : undefined;
-    if (!detected || !extension) {
+    const type = await scanTypeOf(file.buffer);
+    if (!type.accepted) {
       const message = 'Only JPEG, PNG, WebP or PDF files can be attached.';
       throw new UnsupportedMediaTypeException({
-        message: `${message} This file is ${detected ? detected.mime : 'none of these'}.`,
+        message: `${message} This file is ${type.found}.`,
         fields: [{ field: 'attachment', messages: [message] }],
       });
     }
     const { key } = await this.storage.put(file.buffer);
     return {
       attachmentKey: key,
-      attachmentName: cleanDisplayName(file.originalname || 'attachment', extension),
-      attachmentMediaType: detected.mime,
+      attachmentName: cleanDisplayName(file.originalname || 'attachment', type.extension),
+      attachmentMediaType: type.mime,
       attachmentSizeBytes: file.buffer.length,
       attachmentSha256: createHash('sha256').update(file.buffer).digest('hex'),
     };

@@ -6,7 +6,6 @@ import {
   UnsupportedMediaTypeException,
 } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import { fromBuffer } from 'file-type';
 import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import type { Sequelize } from 'sequelize-typescript';
@@ -18,7 +17,7 @@ import type { ScanDto } from './dto/receipt-view.dto';
 import { ReceiptScan } from './models/receipt-scan.model';
 import { toScanView } from './receipt.mappers';
 import { RECEIPT_ENTITY, ReceiptsService } from './receipts.service';
-import { SCAN_MEDIA_TYPES, cleanDisplayName } from './scan-files';
+import { cleanDisplayName, scanTypeOf } from './scan-files';
 
 export interface ScanFile {
   stream: Readable;
@@ -47,12 +46,10 @@ export class ReceiptScansService {
     await this.receipts.findInScope(context.actor, receiptId);
     if (!file) throw fileProblem("Attach the scan as the multipart form field 'file'.");
     if (file.size === 0 || file.buffer.length === 0) throw fileProblem('The file is empty.');
-    // The content decides, never the name or the type the browser claims.
-    const detected = await fromBuffer(file.buffer);
-    const extension = detected ? SCAN_MEDIA_TYPES[detected.mime] : undefined;
-    if (!detected || !extension) {
+    const type = await scanTypeOf(file.buffer);
+    if (!type.accepted) {
       throw new UnsupportedMediaTypeException({
-        message: `Only JPEG, PNG, WebP or PDF files can be attached; this file is ${detected ? detected.mime : 'none of these'}.`,
+        message: `Only JPEG, PNG, WebP or PDF files can be attached; this file is ${type.found}.`,
         fields: [
           { field: 'file', messages: ['Only JPEG, PNG, WebP or PDF files can be attached.'] },
         ],
@@ -65,8 +62,8 @@ export class ReceiptScansService {
           {
             receiptId,
             storageKey: key,
-            displayName: cleanDisplayName(file.originalname, extension),
-            mediaType: detected.mime,
+            displayName: cleanDisplayName(file.originalname, type.extension),
+            mediaType: type.mime,
             sizeBytes: file.buffer.length,
             sha256: createHash('sha256').update(file.buffer).digest('hex'),
             uploadedBy: context.actor.id,

@@ -1,3 +1,5 @@
+import { fromBuffer } from 'file-type';
+
 /** The media types a scan may have, recognised by their content (magic bytes), never the name. */
 export const SCAN_MEDIA_TYPES: Record<string, string> = {
   'image/jpeg': 'jpg',
@@ -5,6 +7,18 @@ export const SCAN_MEDIA_TYPES: Record<string, string> = {
   'image/webp': 'webp',
   'application/pdf': 'pdf',
 };
+
+/** A file's real type, told by its content (never the name or the type the browser claims). */
+export type ScanType =
+  | { accepted: true; mime: string; extension: string }
+  | { accepted: false; /** What the content is, in words, for the refusal. */ found: string };
+
+export async function scanTypeOf(content: Buffer): Promise<ScanType> {
+  const detected = await fromBuffer(content);
+  const extension = detected ? SCAN_MEDIA_TYPES[detected.mime] : undefined;
+  if (!detected || !extension) return { accepted: false, found: detected?.mime ?? 'none of these' };
+  return { accepted: true, mime: detected.mime, extension };
+}
 
 // Control characters, zero-width and bidirectional marks: they can disguise a name's extension.
 // eslint-disable-next-line no-control-regex -- matching control characters is the point
