@@ -7,6 +7,7 @@ import { join } from 'node:path';
 import { step } from '../../db/lifecycle/console';
 import { apiContext, apiExport } from './api-context';
 import { connectTo } from './db-connection';
+import { timed } from './timed';
 
 /** The shapes of the compiled API the bench drives (loaded from dist). */
 interface ExportColumnLike {
@@ -33,12 +34,6 @@ export interface ExportsBenchInput {
   /** Target row counts, e.g. [100_000, 1_000_000]; capped by the receipts there are. */
   sizes: number[];
   folder: string;
-}
-
-async function timed<T>(work: () => Promise<T>): Promise<{ ms: number; value: T }> {
-  const start = process.hrtime.bigint();
-  const value = await work();
-  return { ms: Number(process.hrtime.bigint() - start) / 1e6, value };
 }
 
 /** Peak resident memory growth over a piece of work, sampled every 20 ms. */

@@ -2,6 +2,7 @@ import type { INestApplicationContext, Type } from '@nestjs/common';
 import { step } from '../../db/lifecycle/console';
 import { apiContext, apiExport } from './api-context';
 import { connectTo } from './db-connection';
+import { timed } from './timed';
 import { load } from './load';
 import { SyntheticNetwork, type NetworkSize } from './synthetic-network';
 
@@ -25,12 +26,6 @@ export interface ReportsBenchInput {
 
 export interface ReportsBenchResult {
   rows: Array<Record<string, string | number>>;
-}
-
-async function timed<T>(work: () => Promise<T>): Promise<{ ms: number; value: T }> {
-  const start = process.hrtime.bigint();
-  const value = await work();
-  return { ms: Number(process.hrtime.bigint() - start) / 1e6, value };
 }
 
 const median = (values: number[]) => {
