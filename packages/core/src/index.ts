@@ -51,3 +51,6 @@ export * from './sampling/distributions';
 export * from './sampling/sample-size';
 export * from './sampling/upper-deviation-limit';
 export * from './sampling/draw-sample';
+export * from './contract/audit-log';
+export * from './contract/findings';
+export * from './audit/hash-chain';

@@ -61,6 +61,22 @@ export const POLICIES = {
    * "read-only" everywhere else).
    */
   'audit.sample': ['auditor'],
+  /** Recompute the audit log's hash chain and see the first broken link, if any. */
+  'audit.verify': ['network_admin', 'auditor'],
+  /** Read audit findings and the responses to them. */
+  'findings.read': ['network_admin', 'national_staff', 'auditor'],
+  /** Write findings (linked to traces and samples): the auditor's other write. */
+  'findings.write': ['auditor'],
+  /** Respond to a finding on the network's behalf. */
+  'findings.respond': ['network_admin', 'national_staff'],
+  /** Follow a report figure to its tallies, receipts and scans (in scope). */
+  'trace.read': [
+    'network_admin',
+    'national_staff',
+    'regional_coordinator',
+    'chapter_lead',
+    'auditor',
+  ],
   /** See the system status page (database, queues). */
   'system.read': ['network_admin', 'national_staff'],
 } as const satisfies Record<string, readonly Role[]>;

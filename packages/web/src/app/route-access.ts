@@ -39,6 +39,12 @@ export const routeAccess = {
   jobs: { name: 'Jobs', policy: 'jobs.manage' },
   exports: { name: 'My exports', policy: 'exports.tables' },
   impactPack: { name: 'Impact pack', policy: 'exports.impact-pack' },
+  auditLog: { name: 'Audit log', policy: 'audit.read' },
+  trace: { name: 'Trace a figure', policy: 'trace.read' },
+  samples: { name: 'Audit samples', policy: 'audit.sample' },
+  sample: { name: 'Sample worksheet', policy: 'audit.sample' },
+  findings: { name: 'Findings', policy: 'findings.read' },
+  finding: { name: 'Finding', policy: 'findings.read' },
   account: { name: 'My account', policy: null },
 } as const satisfies Record<string, RouteAccess>;
 

@@ -330,6 +330,66 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               handle: { access: routeAccess.impactPack } satisfies AccessHandle,
             },
             {
+              path: paths.auditLog.path,
+              lazy: async () => ({ Component: (await import('./routes/audit-log')).AuditLogRoute }),
+              loader: requireAccess(routeAccess.auditLog),
+              // Filters and pages change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.auditLog } satisfies AccessHandle,
+            },
+            {
+              path: paths.trace.path,
+              lazy: async () => ({ Component: (await import('./routes/trace')).TraceRoute }),
+              loader: requireAccess(routeAccess.trace),
+              // Filters and pages change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.trace } satisfies AccessHandle,
+            },
+            {
+              path: paths.samples.path,
+              lazy: async () => ({ Component: (await import('./routes/samples')).SamplesRoute }),
+              loader: requireAccess(routeAccess.samples),
+              // Filters and pages change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.samples } satisfies AccessHandle,
+            },
+            {
+              path: paths.sample.path,
+              lazy: async () => ({ Component: (await import('./routes/sample')).SampleRoute }),
+              loader: requireAccess(routeAccess.sample),
+              // Filters and pages change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.sample } satisfies AccessHandle,
+            },
+            {
+              path: paths.findings.path,
+              lazy: async () => ({ Component: (await import('./routes/findings')).FindingsRoute }),
+              loader: requireAccess(routeAccess.findings),
+              // Filters and pages change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.findings } satisfies AccessHandle,
+            },
+            {
+              path: paths.finding.path,
+              lazy: async () => ({ Component: (await import('./routes/finding')).FindingRoute }),
+              loader: requireAccess(routeAccess.finding),
+              // Filters and pages change only the query string: nothing for the guard to redo.
+              shouldRevalidate: ({ currentUrl, nextUrl }) =>
+                currentUrl.pathname !== nextUrl.pathname,
+              errorElement: pageError,
+              handle: { access: routeAccess.finding } satisfies AccessHandle,
+            },
+            {
               path: paths.account.path,
               element: <AccountRoute />,
               loader: requireAccess(routeAccess.account),

@@ -108,6 +108,33 @@ export const paths = {
     path: '/impact-pack',
     getHref: () => '/impact-pack',
   },
+  auditLog: {
+    path: '/audit-log',
+    /** `search`: the log's filters and page, as the viewer keeps them in its URL. */
+    getHref: (search = '') => `/audit-log${search}`,
+  },
+  trace: {
+    path: '/trace/:reference',
+    /** `reference`: the figure's stable trace reference (see core contract/trace). */
+    getHref: (reference: string, measure?: string) =>
+      `/trace/${encodeURIComponent(reference)}${query({ measure })}`,
+  },
+  samples: {
+    path: '/samples',
+    getHref: () => '/samples',
+  },
+  sample: {
+    path: '/samples/:id',
+    getHref: (id: number) => `/samples/${id}`,
+  },
+  findings: {
+    path: '/findings',
+    getHref: () => '/findings',
+  },
+  finding: {
+    path: '/findings/:id',
+    getHref: (id: number) => `/findings/${id}`,
+  },
   setup: {
     path: '/setup',
     getHref: () => '/setup',

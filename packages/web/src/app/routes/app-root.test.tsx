@@ -74,6 +74,8 @@ describe('navigation by role', () => {
       'Monthly tallies',
       'Review',
       'Impact pack',
+      'Findings',
+      'Audit log',
       'Exports',
       'System status',
       'Jobs',
@@ -92,6 +94,7 @@ describe('navigation by role', () => {
       'Monthly tallies',
       'Review',
       'Impact pack',
+      'Findings',
       'Exports',
       'System status',
       'Jobs',
@@ -127,6 +130,20 @@ describe('navigation by role', () => {
       'Network',
       'Dashboard',
       'Campaigns',
+      'Exports',
+    ]);
+  });
+
+  it('gives an auditor the audit samples first, then findings and the audit log, and nothing to write tallies with', async () => {
+    expect(await navigationLinks(demoPeople.auditor)).toEqual([
+      'Audit samples',
+      'Network',
+      'Dashboard',
+      'Campaigns',
+      'Parcels',
+      'Monthly tallies',
+      'Findings',
+      'Audit log',
       'Exports',
     ]);
   });

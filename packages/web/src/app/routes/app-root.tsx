@@ -3,9 +3,12 @@ import {
   BoxMultiple20Regular,
   CalendarLtr20Regular,
   ChartMultiple20Regular,
+  ClipboardSearch20Regular,
   ClipboardTaskListLtr20Regular,
   DataUsage20Regular,
   DocumentTable20Regular,
+  Flag20Regular,
+  History20Regular,
   Home20Regular,
   MailInbox20Regular,
   People20Regular,
@@ -79,6 +82,25 @@ const navItems: NavEntry[] = [
     icon: DocumentTable20Regular,
     access: routeAccess.impactPack,
     firstFor: ['grant_writer'],
+  },
+  {
+    label: routeAccess.samples.name,
+    to: paths.samples.getHref(),
+    icon: ClipboardSearch20Regular,
+    access: routeAccess.samples,
+    firstFor: ['auditor'],
+  },
+  {
+    label: routeAccess.findings.name,
+    to: paths.findings.getHref(),
+    icon: Flag20Regular,
+    access: routeAccess.findings,
+  },
+  {
+    label: routeAccess.auditLog.name,
+    to: paths.auditLog.getHref(),
+    icon: History20Regular,
+    access: routeAccess.auditLog,
   },
   {
     // Short in the navigation; the page says whose they are.

@@ -1,0 +1,2 @@
+/** The audit log's hash chain: pure functions, no framework (issue #8). */
+export {};

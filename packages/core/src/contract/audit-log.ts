@@ -1,0 +1,2 @@
+/** The audit log as readers see it: entries, filters, and the hash chain's verification (issue #8). */
+export {};

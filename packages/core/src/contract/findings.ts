@@ -1,0 +1,2 @@
+/** Audit findings and the responses to them (issue #8). */
+export {};

@@ -1,0 +1,6 @@
+import { PageHeader } from '@/components/ui/page-header';
+
+/** Placeholder: being built. */
+export function FindingsRoute() {
+  return <PageHeader title="Findings" />;
+}

@@ -1,0 +1,6 @@
+import { PageHeader } from '@/components/ui/page-header';
+
+/** Placeholder: being built. */
+export function SamplesRoute() {
+  return <PageHeader title="Audit samples" />;
+}
