@@ -32,14 +32,18 @@ describe('chapterMonthFactsSql', () => {
     expect(replacements).not.toHaveProperty('chapterIds');
   });
 
-  it('sums each line table in a sub-select per revision, so lines cannot multiply rows', () => {
+  it('sums each line table grouped by revision before joining, so lines cannot multiply rows', () => {
     const { sql } = chapterMonthFactsSql();
     const from = sql.slice(sql.indexOf('\nFROM monthly_tallies'));
-    // The only joins are the chapter and the one approved revision: one row per tally.
-    expect(from.match(/JOIN/g)).toHaveLength(2);
-    expect(sql.match(/FROM tally_people_served l WHERE l\.revision_id = r\.id/g)).toHaveLength(
-      PEOPLE_GROUPS.length + 1,
+    // Inner joins: the chapter and the one approved revision; each line table joins as one
+    // row per revision (grouped by revision_id), so a tally stays one row.
+    expect(from.match(/(?<!LEFT )JOIN/g)).toHaveLength(2);
+    const lineJoins = from.match(
+      /LEFT JOIN \(SELECT l\.revision_id, .*? GROUP BY l\.revision_id\)/g,
     );
+    expect(lineJoins).toHaveLength(3);
+    const people = lineJoins!.find((join) => join.includes('tally_people_served'))!;
+    expect(people.match(/CASE WHEN l\.people_group = /g)).toHaveLength(PEOPLE_GROUPS.length);
   });
 
   it.each([

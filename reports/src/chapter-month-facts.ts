@@ -47,28 +47,48 @@ function filterClauses(
   return { where, replacements };
 }
 
-/** A line table summed per revision in a correlated sub-select: one value per row, no fan-out. */
-const lineSum = (table: string, condition = ''): string =>
-  `(SELECT COALESCE(SUM(l.count), 0) FROM ${table} l WHERE l.revision_id = r.id${condition})`;
+/** A line table summed once per revision in a derived table, joined to the revision `r`. */
+const lineTotals = (table: string, alias: string, extra = ''): string =>
+  `LEFT JOIN (SELECT l.revision_id, SUM(l.count) AS total${extra} FROM ${table} l` +
+  ` GROUP BY l.revision_id) ${alias} ON ${alias}.revision_id = r.id`;
+
+const groupColumn = (group: PeopleGroup) => `by_${PEOPLE_GROUP_COLUMNS[group]}`;
 
 /**
- * Every measure's fact column of the revision aliased `r` (line tables summed in sub-selects),
- * as `factFromRow` reads them. Shared by the snapshot facts and the trace, so a traced line adds
- * exactly what the snapshot builder added.
+ * The derived tables every fact column reads from besides the revision `r`: each line table
+ * grouped by revision once (MariaDB splits the grouping per revision when only a few are
+ * joined), so a revision with many lines still gives exactly one row, and a full read costs one
+ * pass over each line table instead of a sub-select per row and measure.
+ */
+export function factJoinsSql(): string {
+  const byGroup = PEOPLE_GROUPS.map(
+    (group) =>
+      `, SUM(CASE WHEN l.people_group = '${group}' THEN l.count ELSE 0 END) AS ${groupColumn(group)}`,
+  ).join('');
+  return [
+    lineTotals('tally_blankets_assembled', 'fa'),
+    lineTotals('tally_blankets_given', 'fg'),
+    lineTotals('tally_people_served', 'fp', byGroup),
+  ].join('\n');
+}
+
+/**
+ * Every measure's fact column of the revision aliased `r` and the derived tables of
+ * `factJoinsSql`, as `factFromRow` reads them. Shared by the snapshot facts and the trace, so a
+ * traced line adds exactly what the snapshot builder added.
  */
 export function factColumnsSql(): string {
   const people = PEOPLE_GROUPS.map(
-    (group) =>
-      `${lineSum('tally_people_served', ` AND l.people_group = '${group}'`)} AS ${PEOPLE_GROUP_COLUMNS[group]}`,
+    (group) => `COALESCE(fp.${groupColumn(group)}, 0) AS ${PEOPLE_GROUP_COLUMNS[group]}`,
   );
   return [
     '  r.panels_accepted,',
     '  r.set_aside_off_size + r.set_aside_hard_care + r.set_aside_soiled + r.set_aside_other AS panels_set_aside,',
     '  r.panels_used,',
-    `  ${lineSum('tally_blankets_assembled')} AS blankets_assembled,`,
+    '  COALESCE(fa.total, 0) AS blankets_assembled,',
     '  r.blankets_received,',
-    `  ${lineSum('tally_blankets_given')} AS blankets_given,`,
-    `  ${lineSum('tally_people_served')} AS people_served,`,
+    '  COALESCE(fg.total, 0) AS blankets_given,',
+    '  COALESCE(fp.total, 0) AS people_served,',
     ...people.map((column) => `  ${column},`),
     '  r.volunteer_hours,',
     '  COALESCE(r.yarn_kg, 0) AS yarn_kg,',
@@ -78,8 +98,7 @@ export function factColumnsSql(): string {
 
 /**
  * One SELECT yielding one row per approved chapter-month: chapter_id, region_id, month
- * ('YYYY-MM'), tally_id, revision and every measure's fact column. Line tables are summed in
- * sub-selects, so a revision with many lines still gives exactly one row.
+ * ('YYYY-MM'), tally_id, revision and every measure's fact column (see `factJoinsSql`).
  */
 export function chapterMonthFactsSql(filter: FactsFilter = {}): SqlQuery {
   const { where, replacements } = filterClauses(filter, 't');
@@ -91,6 +110,7 @@ export function chapterMonthFactsSql(filter: FactsFilter = {}): SqlQuery {
     'JOIN chapters c ON c.id = t.chapter_id',
     // The approved revision only: an amendment in progress leaves it in force.
     'JOIN tally_revisions r ON r.tally_id = t.id AND r.revision = t.approved_revision',
+    factJoinsSql(),
     `WHERE ${['t.approved_revision IS NOT NULL', ...where].join(' AND ')}`,
     'ORDER BY t.chapter_id, t.month',
   ].join('\n');

@@ -1,18 +1,19 @@
 /**
  * Rolls chapter-month facts up into tally snapshots: each chapter over the months of a period
  * (flows sum, stock is the last approved month's), then chapters into regions and the network.
- * Pure, so the job and its tests share one roll-up.
+ * Pure, so the job, the live chapter figures and their tests share one roll-up.
  */
 import {
-  monthsBetween,
+  COMPLIANCE_FIELD,
   addCompliance,
+  addFlowsInPlace,
   addSnapshotFigures,
-  combineMonthsInto,
-  complianceOf,
   emptyCompliance,
   emptySnapshotFigures,
+  monthsBetween,
   monthsOf,
   periodsContaining,
+  reportingStatus,
   type ComplianceFigures,
   type MonthKey,
   type Period,
@@ -53,6 +54,14 @@ export interface BuiltSnapshot extends SnapshotTarget {
   sourceRevisions: Array<[number, number]>;
 }
 
+/**
+ * The scopes whose snapshots are stored. A chapter's figures are read live from its own facts
+ * (a few hundred rows at most), so a full rebuild writes a row per region and period, not one
+ * per chapter and period: the writes, not the reads, were what made rebuilds slow.
+ */
+export const STORED_SCOPES: readonly SnapshotScope[] = ['region', 'network'];
+const ALL_SCOPES: readonly SnapshotScope[] = ['chapter', 'region', 'network'];
+
 export interface RollupInput {
   facts: readonly ChapterMonthFact[];
   chapters: readonly ChapterInfo[];
@@ -61,7 +70,8 @@ export interface RollupInput {
   today: string;
 }
 
-interface ChapterPeriod {
+/** What one scope's chapters add up to in one month: flows, compliance, pending, sources. */
+interface MonthBucket {
   figures: SnapshotFigures;
   compliance: ComplianceFigures;
   pendingTallies: number;
@@ -78,90 +88,168 @@ export function isActiveIn(chapter: ChapterInfo, month: MonthKey): boolean {
 
 const targetKey = (target: SnapshotTarget) =>
   `${target.scope}:${target.scopeId}:${target.period.kind}:${target.period.key}`;
+const periodId = (period: Pick<Period, 'kind' | 'key'>) => `${period.kind}:${period.key}`;
+const scopeKey = (scope: SnapshotScope, id: number) => `${scope}:${id}`;
 
-/** Builds the snapshots asked for from the facts, chapters and statuses given. */
+function groupBy<T>(items: readonly T[], keyOf: (item: T) => number): Map<number, T[]> {
+  const groups = new Map<number, T[]>();
+  for (const item of items) {
+    const key = keyOf(item);
+    const list = groups.get(key);
+    if (list) list.push(item);
+    else groups.set(key, [item]);
+  }
+  return groups;
+}
+
+/**
+ * Builds the snapshots asked for from the facts, chapters and statuses given. Each chapter-month
+ * is added once into its scopes' month buckets (flows, compliance, pending, sources); a target
+ * then adds up the buckets of its period's months. Stock is a level, not a flow: each chapter's
+ * closing stock of its last approved month in the period is added to the period's targets
+ * directly. Sums grow in place, because a full rebuild adds hundreds of thousands of months.
+ */
 export function rollUpSnapshots(
   input: RollupInput,
   targets: readonly SnapshotTarget[],
 ): BuiltSnapshot[] {
   const currentMonth = input.today.slice(0, 7);
-  const factOf = new Map(input.facts.map((fact) => [`${fact.chapterId}:${fact.month}`, fact]));
-  const statusOf = new Map(input.statuses.map((s) => [`${s.chapterId}:${s.month}`, s]));
-  // Indexed once: a full rebuild asks for the chapters of a scope for every scope × period.
-  const byRegion = new Map<number, ChapterInfo[]>();
-  const byId = new Map<number, ChapterInfo>();
-  for (const chapter of input.chapters) {
-    byId.set(chapter.chapterId, chapter);
-    const list = byRegion.get(chapter.regionId);
-    if (list) list.push(chapter);
-    else byRegion.set(chapter.regionId, [chapter]);
-  }
-  const chaptersOf = (scope: SnapshotScope, scopeId: number): readonly ChapterInfo[] => {
-    if (scope === 'network') return input.chapters;
-    if (scope === 'region') return byRegion.get(scopeId) ?? [];
-    const chapter = byId.get(scopeId);
-    return chapter ? [chapter] : [];
-  };
-
-  const cache = new Map<string, ChapterPeriod>();
-  const chapterPeriod = (chapter: ChapterInfo, period: Period): ChapterPeriod => {
-    const key = `${chapter.chapterId}:${period.kind}:${period.key}`;
-    const cached = cache.get(key);
-    if (cached) return cached;
-    const months = monthsOf(period);
-    const monthly: SnapshotFigures[] = [];
-    const sources: Array<[number, number]> = [];
-    let compliance = emptyCompliance();
-    let pendingTallies = 0;
-    for (const month of months) {
-      const fact = factOf.get(`${chapter.chapterId}:${month}`);
-      monthly.push(fact ? fact.figures : emptySnapshotFigures());
-      if (fact) sources.push([fact.tallyId, fact.revision]);
-      const status = statusOf.get(`${chapter.chapterId}:${month}`);
-      if (status?.pending) pendingTallies += 1;
-      if (isActiveIn(chapter, month) && month <= currentMonth) {
-        compliance = addCompliance(
-          compliance,
-          complianceOf(
-            [
-              {
-                month,
-                dueDay: chapter.dueDay,
-                firstSubmittedAt: status?.firstSubmittedAt ?? null,
-              },
-            ],
-            input.today,
-          ),
-        );
+  const unique = new Map<string, SnapshotTarget>();
+  for (const target of targets) unique.set(targetKey(target), target);
+  const built = new Map<string, BuiltSnapshot>();
+  // Targets by period and scope; the periods each month falls in; the scopes anyone asked for.
+  const byPeriod = new Map<string, Map<string, BuiltSnapshot>>();
+  const periodsOfMonth = new Map<MonthKey, Period[]>();
+  const wantedScopes = new Set<string>();
+  for (const [key, target] of unique) {
+    const snapshot: BuiltSnapshot = {
+      ...target,
+      figures: emptySnapshotFigures(),
+      compliance: emptyCompliance(),
+      pendingTallies: 0,
+      sourceRevisions: [],
+    };
+    built.set(key, snapshot);
+    wantedScopes.add(scopeKey(target.scope, target.scopeId));
+    let scopes = byPeriod.get(periodId(target.period));
+    if (!scopes) {
+      scopes = new Map();
+      byPeriod.set(periodId(target.period), scopes);
+      for (const month of monthsOf(target.period)) {
+        const periods = periodsOfMonth.get(month);
+        if (periods) periods.push(target.period);
+        else periodsOfMonth.set(month, [target.period]);
       }
     }
-    const built = { figures: combineMonthsInto(monthly), compliance, pendingTallies, sources };
-    cache.set(key, built);
-    return built;
+    scopes.set(scopeKey(target.scope, target.scopeId), snapshot);
+  }
+
+  const buckets = new Map<string, Map<MonthKey, MonthBucket>>();
+  const bucketsOf = (scope: string): Map<MonthKey, MonthBucket> => {
+    let months = buckets.get(scope);
+    if (!months) {
+      months = new Map();
+      buckets.set(scope, months);
+    }
+    return months;
+  };
+  const bucketIn = (months: Map<MonthKey, MonthBucket>, month: MonthKey): MonthBucket => {
+    let bucket = months.get(month);
+    if (!bucket) {
+      bucket = {
+        figures: emptySnapshotFigures(),
+        compliance: emptyCompliance(),
+        pendingTallies: 0,
+        sources: [],
+      };
+      months.set(month, bucket);
+    }
+    return bucket;
+  };
+  // A reporting status depends only on these, and a full rebuild asks for it per chapter-month.
+  const statusMemo = new Map<string, ReturnType<typeof reportingStatus>>();
+  const statusOf = (month: MonthKey, dueDay: number, submittedAt: string | null) => {
+    const key = `${month}|${dueDay}|${submittedAt ?? ''}`;
+    let status = statusMemo.get(key);
+    if (status === undefined) {
+      status = reportingStatus({
+        month,
+        dueDay,
+        firstSubmittedAt: submittedAt,
+        today: input.today,
+      });
+      statusMemo.set(key, status);
+    }
+    return status;
   };
 
-  const built = new Map<string, BuiltSnapshot>();
-  for (const target of targets) {
-    if (built.has(targetKey(target))) continue;
-    let figures = emptySnapshotFigures();
-    let compliance = emptyCompliance();
-    let pendingTallies = 0;
-    const sources: Array<[number, number]> = [];
-    for (const chapter of chaptersOf(target.scope, target.scopeId)) {
-      const part = chapterPeriod(chapter, target.period);
-      figures = addSnapshotFigures(figures, part.figures);
-      compliance = addCompliance(compliance, part.compliance);
-      pendingTallies += part.pendingTallies;
-      sources.push(...part.sources);
+  const months = [...periodsOfMonth.keys()];
+  const factsOf = groupBy(input.facts, (fact) => fact.chapterId);
+  const statusesOf = groupBy(input.statuses, (status) => status.chapterId);
+  for (const chapter of input.chapters) {
+    const scopes = [
+      scopeKey('chapter', chapter.chapterId),
+      scopeKey('region', chapter.regionId),
+      scopeKey('network', 0),
+    ].filter((scope) => wantedScopes.has(scope));
+    if (scopes.length === 0) continue;
+    const monthBuckets = scopes.map(bucketsOf);
+
+    const lastFactIn = new Map<Period, ChapterMonthFact>();
+    const facts = [...(factsOf.get(chapter.chapterId) ?? [])].sort((a, b) =>
+      a.month < b.month ? -1 : a.month > b.month ? 1 : 0,
+    );
+    for (const fact of facts) {
+      const periods = periodsOfMonth.get(fact.month);
+      if (!periods) continue;
+      for (const period of periods) lastFactIn.set(period, fact);
+      for (const inScope of monthBuckets) {
+        const bucket = bucketIn(inScope, fact.month);
+        addFlowsInPlace(bucket.figures, fact.figures);
+        bucket.sources.push([fact.tallyId, fact.revision]);
+      }
     }
-    sources.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
-    built.set(targetKey(target), {
-      ...target,
-      figures,
-      compliance,
-      pendingTallies,
-      sourceRevisions: sources,
-    });
+    // The chapter's closing stock of its last approved month in each period.
+    for (const [period, fact] of lastFactIn) {
+      const inPeriod = byPeriod.get(periodId(period))!;
+      for (const scope of scopes) {
+        const snapshot = inPeriod.get(scope);
+        if (!snapshot) continue;
+        snapshot.figures.panelsInStock += fact.figures.panelsInStock;
+        snapshot.figures.blanketsInStock += fact.figures.blanketsInStock;
+      }
+    }
+
+    const submittedAt = new Map<MonthKey, string | null>();
+    for (const status of statusesOf.get(chapter.chapterId) ?? []) {
+      submittedAt.set(status.month, status.firstSubmittedAt);
+      if (!status.pending || !periodsOfMonth.has(status.month)) continue;
+      for (const inScope of monthBuckets) bucketIn(inScope, status.month).pendingTallies += 1;
+    }
+    for (const month of months) {
+      if (month > currentMonth || !isActiveIn(chapter, month)) continue;
+      const field =
+        COMPLIANCE_FIELD[statusOf(month, chapter.dueDay, submittedAt.get(month) ?? null)];
+      for (const inScope of monthBuckets) {
+        const { compliance } = bucketIn(inScope, month);
+        compliance.expected += 1;
+        compliance[field] += 1;
+      }
+    }
+  }
+
+  for (const snapshot of built.values()) {
+    const inScope = buckets.get(scopeKey(snapshot.scope, snapshot.scopeId));
+    if (!inScope) continue;
+    for (const month of monthsOf(snapshot.period)) {
+      const bucket = inScope.get(month);
+      if (!bucket) continue;
+      addFlowsInPlace(snapshot.figures, bucket.figures);
+      snapshot.compliance = addCompliance(snapshot.compliance, bucket.compliance);
+      snapshot.pendingTallies += bucket.pendingTallies;
+      for (const source of bucket.sources) snapshot.sourceRevisions.push(source);
+    }
+    snapshot.sourceRevisions.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
   }
   return [...built.values()];
 }
@@ -200,21 +288,28 @@ export function networkFromRegions(period: Period, regions: readonly RegionPart[
   };
 }
 
+/** The target of `scope` that holds the chapter (the network has id 0). */
+function holding(
+  scope: SnapshotScope,
+  chapter: Pick<ChapterInfo, 'chapterId' | 'regionId'>,
+): number {
+  return scope === 'chapter' ? chapter.chapterId : scope === 'region' ? chapter.regionId : 0;
+}
+
 /**
- * The snapshots a change of one chapter-month touches: that chapter, its region and the network,
- * each for the month, its quarter and its fiscal year.
+ * The snapshots a change of one chapter-month touches: that chapter, its region and the network
+ * (those of `scopes`), each for the month, its quarter and its fiscal year.
  */
 export function targetsOfChapterMonth(
   chapter: Pick<ChapterInfo, 'chapterId' | 'regionId'>,
   month: MonthKey,
   fiscalYearStartMonth: number,
+  scopes: readonly SnapshotScope[] = ALL_SCOPES,
 ): SnapshotTarget[] {
   const periods = periodsContaining(month, fiscalYearStartMonth);
-  return periods.flatMap((period) => [
-    { scope: 'chapter' as const, scopeId: chapter.chapterId, period },
-    { scope: 'region' as const, scopeId: chapter.regionId, period },
-    { scope: 'network' as const, scopeId: 0, period },
-  ]);
+  return periods.flatMap((period) =>
+    scopes.map((scope) => ({ scope, scopeId: holding(scope, chapter), period })),
+  );
 }
 
 /**
@@ -226,6 +321,7 @@ export function targetsOfMonths(
   chapters: readonly Pick<ChapterInfo, 'chapterId' | 'regionId'>[],
   tallied: ReadonlyArray<{ chapterId: number; month: MonthKey }>,
   fiscalYearStartMonth: number,
+  scopes: readonly SnapshotScope[] = ALL_SCOPES,
 ): SnapshotTarget[] {
   const regionOf = new Map(chapters.map((chapter) => [chapter.chapterId, chapter.regionId]));
   const targets = new Map<string, SnapshotTarget>();
@@ -233,19 +329,23 @@ export function targetsOfMonths(
     const target = { scope, scopeId, period };
     targets.set(targetKey(target), target);
   };
+  // Each scope × month once: a full rebuild passes every chapter-month of the network.
+  const seen = new Set<string>();
   const periodsOf = new Map<MonthKey, Period[]>();
   for (const { chapterId, month } of tallied) {
     const regionId = regionOf.get(chapterId);
     if (regionId === undefined) continue;
-    let periods = periodsOf.get(month);
-    if (!periods) {
-      periods = periodsContaining(month, fiscalYearStartMonth);
-      periodsOf.set(month, periods);
-    }
-    for (const period of periods) {
-      add('chapter', chapterId, period);
-      add('region', regionId, period);
-      add('network', 0, period);
+    for (const scope of scopes) {
+      const scopeId = holding(scope, { chapterId, regionId });
+      const key = `${scope}:${scopeId}:${month}`;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      let periods = periodsOf.get(month);
+      if (!periods) {
+        periods = periodsContaining(month, fiscalYearStartMonth);
+        periodsOf.set(month, periods);
+      }
+      for (const period of periods) add(scope, scopeId, period);
     }
   }
   return [...targets.values()];

@@ -43,7 +43,10 @@ export interface TallyStatusFilter extends ChapterFilter {
  */
 export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
   const where: string[] = [];
-  const replacements: Record<string, unknown> = { monthFormat: '%Y-%m' };
+  const replacements: Record<string, unknown> = {
+    monthFormat: '%Y-%m',
+    timeFormat: '%Y-%m-%d %H:%i:%s',
+  };
   if (filter.chapterIds !== undefined) {
     const ids = requireIds('chapterIds', filter.chapterIds);
     where.push(ids.length === 0 ? '1 = 0' : 't.chapter_id IN (:chapterIds)');
@@ -59,7 +62,10 @@ export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
   }
   return {
     sql: [
-      'SELECT t.chapter_id, DATE_FORMAT(t.month, :monthFormat) AS month, t.first_submitted_at,',
+      // Timestamps as text ('YYYY-MM-DD HH:MM:SS', the connection's UTC), so every reader
+      // gets the same value whatever its driver's date decoding.
+      'SELECT t.chapter_id, DATE_FORMAT(t.month, :monthFormat) AS month,',
+      '  DATE_FORMAT(t.first_submitted_at, :timeFormat) AS first_submitted_at,',
       `  CASE WHEN ${PENDING_TALLY_CONDITION} THEN 1 ELSE 0 END AS pending`,
       'FROM monthly_tallies t',
       where.length > 0 ? `WHERE ${where.join(' AND ')}` : '',

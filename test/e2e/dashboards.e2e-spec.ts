@@ -5,7 +5,9 @@ import type { Sequelize } from 'sequelize-typescript';
 import type { Chapter } from '../../services/api/src/chapters/models/chapter.model';
 import type { Region } from '../../services/api/src/regions/models/region.model';
 import { caller } from './fixtures/tallies';
-import { compliance, figures, putSnapshot } from './fixtures/snapshot-rows';
+import { SnapshotBuilder } from '../../services/api/src/reports/snapshot-builder.service';
+import { compliance, figures } from './fixtures/snapshot-rows';
+import { putApprovedMonth } from './fixtures/tally-rows';
 import { aRegion } from './support/network-builders';
 import { signedIn } from './support/people-builders';
 import { fieldsNamed } from './support/setup-builders';
@@ -13,8 +15,8 @@ import { startTestApp, type TestApp } from './support/test-app';
 
 jest.setTimeout(30_000);
 
-// Snapshot rows of this suite live in 2011, far before the demo's history, so the builder never
-// writes the same network rows. Region and chapter rows belong to this suite's own regions.
+// The tallies of this suite live in 2011, far before the demo's history and the other suites'
+// months, so the network rows of 2011 hold this suite's tallies only.
 const JAN = '2011-01';
 const FEB = '2011-02';
 const MAR = '2011-03';
@@ -60,6 +62,7 @@ describe('dashboards', () => {
   let testApp: TestApp;
   let home: { region: Region; chapters: Chapter[] };
   let away: { region: Region; chapters: Chapter[] };
+  let startedAt: string;
   const tokens: Record<'admin' | 'writer' | 'coordinator' | 'lead', string> = {
     admin: '',
     writer: '',
@@ -70,12 +73,17 @@ describe('dashboards', () => {
 
   beforeAll(async () => {
     testApp = await startTestApp();
+    // Active from 2011: the suite's months are expected, so compliance counts them.
     home = await aRegion()
       .named('Dash Home')
-      .withChapter('Dash Birch')
-      .withChapter('Dash Aspen')
+      .withChapter('Dash Birch', '2011-01-01')
+      .withChapter('Dash Aspen', '2011-01-01')
       .build(testApp.app);
-    away = await aRegion().named('Dash Away').withChapter('Dash Far').build(testApp.app);
+    away = await aRegion()
+      .named('Dash Away')
+      .withChapter('Dash Far', '2011-01-01')
+      .build(testApp.app);
+    startedAt = new Date().toISOString();
     const [chapterA] = home.chapters;
     tokens.admin = (await signedIn(testApp, 'network_admin')).token;
     tokens.writer = (await signedIn(testApp, 'grant_writer')).token;
@@ -84,79 +92,45 @@ describe('dashboards', () => {
     ).token;
     tokens.lead = (await signedIn(testApp, 'chapter_lead', { chapterId: chapterA.id })).token;
 
+    // Real approved tallies: chapters' figures are read live from them, and the builder stores
+    // the region and network rows from the same tallies.
     const app = testApp.app;
-    const month = (key: string, values: SnapshotFigures, asOf: string, pendingTallies = 0) =>
-      putSnapshot(app, {
-        scope: 'chapter',
-        scopeId: chapterA.id,
-        kind: 'month',
-        key,
-        figures: values,
-        compliance: compliance({
-          expected: 1,
-          onTime: key === FEB ? 0 : 1,
-          late: key === FEB ? 1 : 0,
-        }),
-        pendingTallies,
-        asOf,
-      });
-    await month(JAN, janA, '2024-05-01T10:00:00.000Z');
-    await month(FEB, febA, '2024-05-02T10:00:00.000Z', 1);
-    await month(MAR, marA, '2024-05-03T10:00:00.000Z');
-    // A stored quarter whose figures differ from its months: the dashboard must read it as stored.
-    await putSnapshot(app, {
-      scope: 'chapter',
-      scopeId: chapterA.id,
-      kind: 'quarter',
-      key: '2011-Q1',
-      figures: figures({ panelsAccepted: 7777, approvedTallies: 3 }),
-      asOf: '2024-05-04T10:00:00.000Z',
+    const farChapter = away.chapters[0];
+    await putApprovedMonth(app, {
+      chapterId: chapterA.id,
+      month: JAN,
+      figures: janA,
+      firstSubmittedAt: '2011-02-05T09:00:00Z',
     });
-    // The region has months but no quarter row: its quarter is combined from them.
-    for (const [key, values] of [
-      [JAN, janA],
-      [FEB, febA],
-      [MAR, marA],
-    ] as const) {
-      await putSnapshot(app, {
-        scope: 'region',
-        scopeId: home.region.id,
-        kind: 'month',
-        key,
-        figures: values,
-        asOf: '2024-06-01T00:00:00.000Z',
-      });
-    }
-    await putSnapshot(app, {
-      scope: 'region',
-      scopeId: away.region.id,
-      kind: 'month',
-      key: MAR,
+    await putApprovedMonth(app, {
+      chapterId: chapterA.id,
+      month: FEB,
+      figures: febA,
+      // Late (due 10 March), and an amendment under way: pending while revision 1 counts.
+      firstSubmittedAt: '2011-03-20T09:00:00Z',
+      amendmentPending: true,
+    });
+    await putApprovedMonth(app, {
+      chapterId: chapterA.id,
+      month: MAR,
+      figures: marA,
+      firstSubmittedAt: '2011-04-05T09:00:00Z',
+    });
+    await putApprovedMonth(app, {
+      chapterId: farChapter.id,
+      month: MAR,
       figures: figures({ panelsAccepted: 9, approvedTallies: 1 }),
-      asOf: '2024-06-01T00:00:00.000Z',
+      firstSubmittedAt: '2011-04-05T09:00:00Z',
     });
-    await putSnapshot(app, {
-      scope: 'network',
-      scopeId: null,
-      kind: 'month',
-      key: MAR,
-      figures: figures({ panelsAccepted: 129, approvedTallies: 2 }),
-      asOf: '2024-06-02T00:00:00.000Z',
-    });
-    await putSnapshot(app, {
-      scope: 'network',
-      scopeId: null,
-      kind: 'month',
-      key: FEB,
-      figures: figures({ panelsAccepted: 80, approvedTallies: 1 }),
-      asOf: '2024-06-02T00:00:00.000Z',
-    });
+    const builder = app.get(SnapshotBuilder);
+    for (const month of [JAN, FEB, MAR]) await builder.rebuildForChapterMonth(chapterA.id, month);
+    await builder.rebuildForChapterMonth(farChapter.id, MAR);
   });
   afterAll(() => testApp.close());
 
   const chapterUrl = (query: string) => `/api/dashboards/chapters/${home.chapters[0].id}?${query}`;
 
-  it('shows a chapter month as stored, the month before, twelve months of trend and no breakdown', async () => {
+  it('shows a chapter month from its tallies, the month before, twelve months of trend and no breakdown', async () => {
     const response = await as('lead')
       .get(chapterUrl(`periodKind=month&period=${MAR}`))
       .expect(200);
@@ -166,7 +140,8 @@ describe('dashboards', () => {
     expect(view.scopeName).toBe(home.chapters[0].name);
     expect(view.period).toMatchObject({ kind: 'month', key: MAR, from: MAR, to: MAR });
     expect(view.current.figures).toEqual(marA);
-    expect(view.current.asOf).toBe('2024-05-03T10:00:00.000Z');
+    // A chapter's figures are read live: as of the request, not of a rebuild.
+    expect(view.current.asOf >= startedAt).toBe(true);
     expect(view.previous?.period.key).toBe(FEB);
     expect(view.previous?.figures).toEqual(febA);
     expect(view.previous?.pendingTallies).toBe(1);
@@ -190,8 +165,8 @@ describe('dashboards', () => {
     ]);
     expect(view.trend[0].figures).toEqual(figures({}));
     expect(view.breakdown).toEqual([]);
-    // The oldest snapshot shown: January's, in the trend.
-    expect(view.asOf).toBe('2024-05-01T10:00:00.000Z');
+    // Months before the chapter opened are not expected: nothing is counted missing there.
+    expect(view.trend[0].compliance).toEqual(compliance({}));
   });
 
   it('combines a custom range from months: flows summed, stock from the last month', async () => {
@@ -217,18 +192,21 @@ describe('dashboards', () => {
     expect(current.approvedTallies).toBe(3);
     expect(view.current.compliance).toEqual(compliance({ expected: 3, onTime: 2, late: 1 }));
     expect(view.current.pendingTallies).toBe(1);
-    expect(view.current.asOf).toBe('2024-05-01T10:00:00.000Z');
     // The three months before, with no snapshots: empty.
     expect(view.previous?.period).toMatchObject({ kind: 'custom', from: '2010-10', to: '2010-12' });
     expect(view.previous?.figures).toEqual(figures({}));
     expect(view.trend.map((entry) => entry.period.key)).toEqual([JAN, FEB, MAR]);
   });
 
-  it('reads a stored quarter as stored, and combines a quarter whose row is missing', async () => {
+  it('gives a quarter as its months add up, for the chapter (live) and its region (stored)', async () => {
     const chapter = await as('admin')
       .get(chapterUrl('periodKind=quarter&period=2011-Q1'))
       .expect(200);
-    expect((chapter.body as DashboardView).current.figures.panelsAccepted).toBe(7777);
+    expect((chapter.body as DashboardView).current.figures).toMatchObject({
+      panelsAccepted: 300,
+      panelsInStock: 180,
+      approvedTallies: 3,
+    });
 
     const region = await as('coordinator')
       .get(`/api/dashboards/regions/${home.region.id}?period=2011-Q1`)

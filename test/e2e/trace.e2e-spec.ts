@@ -324,9 +324,19 @@ describe('trace of a figure to its tallies, receipts and scans, on the demo netw
       expect(fieldsOf(response.body)).toEqual(['measure']);
     });
 
-    it('finds no figure for a period no snapshot was built for (404)', async () => {
-      const response = await trace(auditor, `chapter:${homeChapterId}:2011-01`);
+    it('finds no figure for a region period no snapshot was built for (404)', async () => {
+      const response = await trace(auditor, `region:${homeRegionId}:2009-01`);
       expect(response.status).toBe(404);
+    });
+
+    it("traces a chapter's month without tallies to nothing: zero, agreeing, no lines", async () => {
+      // Chapters are read live, so every period of a chapter has figures, if only zeros.
+      const response = await trace(auditor, `chapter:${homeChapterId}:2009-01`, 'panelsAccepted');
+      expect(response.status).toBe(200);
+      const view = response.body as TraceView;
+      expect(view.figure).toEqual({ panelsAccepted: 0 });
+      expect(view.agrees).toBe(true);
+      expect(view.tallies).toEqual([]);
     });
   });
 });

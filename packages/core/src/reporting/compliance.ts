@@ -1,5 +1,5 @@
 import type { ComplianceFigures } from '../contract/reports';
-import type { MonthKey } from '../contract/tallies';
+import type { MonthKey, ReportingStatus } from '../contract/tallies';
 import { reportingStatus } from '../tallies/reporting';
 
 export interface ComplianceEntry {
@@ -10,9 +10,21 @@ export interface ComplianceEntry {
 }
 
 /**
- * Reporting compliance of the chapter-months given (one entry per chapter and month expected to
- * report). 'upcoming' and 'due' are still open: they are neither late nor missing yet.
+ * Where a chapter-month's reporting status counts besides `expected`: 'upcoming' and 'due' are
+ * still open, neither late nor missing yet.
  */
+export const COMPLIANCE_FIELD: Record<
+  ReportingStatus,
+  Exclude<keyof ComplianceFigures, 'expected'>
+> = {
+  'on-time': 'onTime',
+  late: 'late',
+  missing: 'missing',
+  upcoming: 'open',
+  due: 'open',
+};
+
+/** Reporting compliance of the chapter-months given (one entry per chapter and month expected to report). */
 export function complianceOf(
   entries: ReadonlyArray<ComplianceEntry>,
   today: string,
@@ -20,21 +32,7 @@ export function complianceOf(
   const figures = emptyCompliance();
   for (const entry of entries) {
     figures.expected += 1;
-    switch (reportingStatus({ ...entry, today })) {
-      case 'on-time':
-        figures.onTime += 1;
-        break;
-      case 'late':
-        figures.late += 1;
-        break;
-      case 'missing':
-        figures.missing += 1;
-        break;
-      case 'upcoming':
-      case 'due':
-        figures.open += 1;
-        break;
-    }
+    figures[COMPLIANCE_FIELD[reportingStatus({ ...entry, today })]] += 1;
   }
   return figures;
 }

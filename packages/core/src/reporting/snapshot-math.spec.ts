@@ -1,6 +1,11 @@
-import type { SnapshotFigures } from '../contract/reports';
+import { SNAPSHOT_MEASURES, type SnapshotFigures } from '../contract/reports';
 import { PEOPLE_GROUPS } from '../contract/tallies';
-import { addSnapshotFigures, combineMonthsInto, emptySnapshotFigures } from './snapshot-math';
+import {
+  addFlowsInPlace,
+  addSnapshotFigures,
+  combineMonthsInto,
+  emptySnapshotFigures,
+} from './snapshot-math';
 
 function figures(values: Partial<SnapshotFigures>): SnapshotFigures {
   return { ...emptySnapshotFigures(), approvedTallies: 1, ...values };
@@ -136,5 +141,35 @@ describe('combineMonthsInto (one chapter, months into a longer period)', () => {
     });
     expect(added.panelsInStock).toBe(70);
     expect(combined.panelsInStock).toBe(20);
+  });
+});
+
+describe('addFlowsInPlace', () => {
+  it('adds every flow measure and every people group, and leaves stock alone', () => {
+    // Each measure and group its own value, so a measure left out or added twice shows.
+    const source = emptySnapshotFigures();
+    SNAPSHOT_MEASURES.forEach((measure, index) => (source[measure] = index + 1));
+    PEOPLE_GROUPS.forEach((group, index) => (source.peopleServedByGroup[group] = 100 + index));
+    const target = emptySnapshotFigures();
+    target.panelsInStock = 7;
+    target.blanketsInStock = 8;
+    addFlowsInPlace(target, source);
+    addFlowsInPlace(target, source);
+    const twice = addSnapshotFigures(source, source);
+    for (const measure of SNAPSHOT_MEASURES) {
+      if (measure === 'panelsInStock') expect(target[measure]).toBe(7);
+      else if (measure === 'blanketsInStock') expect(target[measure]).toBe(8);
+      else expect(`${measure} ${target[measure]}`).toBe(`${measure} ${twice[measure]}`);
+    }
+    expect(target.peopleServedByGroup).toEqual(twice.peopleServedByGroup);
+  });
+
+  it('keeps hours and kg to their stored precision', () => {
+    const target = emptySnapshotFigures();
+    const tenth = { ...emptySnapshotFigures(), volunteerHours: 0.1, yarnKg: 0.000001 };
+    for (let i = 0; i < 3; i += 1) addFlowsInPlace(target, tenth);
+    // 0.1 + 0.1 + 0.1 is 0.30000000000000004 in binary floating point.
+    expect(target.volunteerHours).toBe(0.3);
+    expect(target.yarnKg).toBe(0.000003);
   });
 });

@@ -1,8 +1,17 @@
 import { Injectable } from '@nestjs/common';
 import { InjectConnection } from '@nestjs/sequelize';
-import type { MonthKey, PeriodKind, SnapshotScope } from '@tallyloom/core';
+import {
+  monthPeriod,
+  parsePeriod,
+  type MonthKey,
+  type Period,
+  type PeriodKind,
+  type SnapshotScope,
+} from '@tallyloom/core';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
+import { ChapterFigures } from '../reports/chapter-figures.service';
+import { SettingsService } from '../settings/settings.service';
 import { isoTimestamp, jsonColumn, type SnapshotRow } from './snapshot-rows';
 
 /** What to read: the month rows of some months, and whole-period rows of one kind. */
@@ -18,13 +27,21 @@ export interface SnapshotWanted {
 // A value no key can take, so `IN (…)` is never empty (an empty list is a syntax error).
 const NONE = ['-'];
 
-/** Reads report snapshots written by the snapshot builder; the dashboards never write them. */
+/**
+ * Reads report snapshots: regions and the network from the rows the snapshot builder writes (the
+ * dashboards never write them), chapters built live from their tallies.
+ */
 @Injectable()
 export class SnapshotReader {
-  constructor(@InjectConnection() private readonly sequelize: Sequelize) {}
+  constructor(
+    @InjectConnection() private readonly sequelize: Sequelize,
+    private readonly chapters: ChapterFigures,
+    private readonly settings: SettingsService,
+  ) {}
 
   async find(wanted: SnapshotWanted): Promise<SnapshotRow[]> {
     if (wanted.scopeIds.length === 0) return [];
+    if (wanted.scope === 'chapter') return this.live(wanted);
     const rows = await this.sequelize.query<Record<string, unknown>>(
       `SELECT scope, scope_id AS scopeId, period_kind AS periodKind, period_key AS periodKey,
               figures, compliance, pending_tallies AS pendingTallies, as_of AS asOf
@@ -52,6 +69,27 @@ export class SnapshotReader {
       compliance: jsonColumn(row.compliance),
       pendingTallies: Number(row.pendingTallies),
       asOf: isoTimestamp(row.asOf),
+    }));
+  }
+
+  private async live(wanted: SnapshotWanted): Promise<SnapshotRow[]> {
+    const { fiscalYearStartMonth } = await this.settings.current();
+    const periods: Period[] = [...new Set(wanted.months)].map((month) => monthPeriod(month));
+    if (wanted.kind && wanted.kind !== 'month') {
+      for (const key of new Set(wanted.keys ?? [])) {
+        periods.push(parsePeriod(wanted.kind, key, fiscalYearStartMonth));
+      }
+    }
+    const asOf = new Date().toISOString();
+    return (await this.chapters.build(wanted.scopeIds, periods)).map((built) => ({
+      scope: 'chapter',
+      scopeId: built.scopeId,
+      periodKind: built.period.kind as SnapshotRow['periodKind'],
+      periodKey: built.period.key,
+      figures: built.figures,
+      compliance: built.compliance,
+      pendingTallies: built.pendingTallies,
+      asOf,
     }));
   }
 }

@@ -13,6 +13,7 @@ import {
   monthRangeOf,
   networkFromRegions,
   rollUpSnapshots,
+  STORED_SCOPES,
   tallyStatusSql,
   targetsOfChapterMonth,
   targetsOfMonths,
@@ -31,6 +32,8 @@ import { ViewCache } from '../cache/view-cache';
 import { SettingsService } from '../settings/settings.service';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
 import type { RebuildSummary } from './report-jobs';
+import { batchRows, selectRows } from './driver-rows';
+import { chapterInfoFromRow, isoDate, tallyStatusFromRow } from './snapshot-inputs';
 
 // One rebuild at a time across every worker: two jobs touching the same region would otherwise
 // each read before the other's tally committed and the later write could carry stale figures.
@@ -44,21 +47,6 @@ type Row = Record<string, unknown>;
 /** A JSON column (the driver may give text or a parsed value). */
 function jsonOf<T>(value: unknown): T {
   return (typeof value === 'string' ? JSON.parse(value) : value) as T;
-}
-
-/** A DATE column as 'YYYY-MM-DD' (the driver may give a Date or text). */
-function isoDate(value: unknown): string | null {
-  if (value instanceof Date) return value.toISOString().slice(0, 10);
-  return typeof value === 'string' ? value.slice(0, 10) : null;
-}
-
-/** A DATETIME read at the connection's UTC time zone, as an ISO timestamp. */
-function isoTimestamp(value: unknown): string | null {
-  if (value instanceof Date) return value.toISOString();
-  if (typeof value !== 'string') return null;
-  return new Date(
-    /[zZ]|[+-]\d\d:?\d\d$/.test(value) ? value : `${value.replace(' ', 'T')}Z`,
-  ).toISOString();
 }
 
 /**
@@ -76,9 +64,10 @@ export class SnapshotBuilder {
   ) {}
 
   /**
-   * The snapshots one chapter-month touches, and the campaigns its receipts credit. Chapter and
-   * region are built from the region's facts; the network from that region and the other
-   * regions' stored rows, so the work does not grow with the size of the network.
+   * The snapshots one chapter-month touches, and the campaigns its receipts credit. The region
+   * is built from its facts; the network from that region and the other regions' stored rows, so
+   * the work does not grow with the size of the network. Chapters have no stored rows: their
+   * figures are read live (ChapterFigures).
    */
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async (transaction) => {
@@ -86,7 +75,7 @@ export class SnapshotBuilder {
       const chapter = chapters.find((each) => each.chapterId === chapterId);
       if (!chapter) throw new Error(`chapter ${chapterId} does not exist`);
       const { fiscalYearStartMonth } = await this.settings.current();
-      const targets = targetsOfChapterMonth(chapter, month, fiscalYearStartMonth);
+      const targets = targetsOfChapterMonth(chapter, month, fiscalYearStartMonth, STORED_SCOPES);
       const inRegion = chapters.filter((each) => each.regionId === chapter.regionId);
       const built = await this.build(
         inRegion,
@@ -174,30 +163,28 @@ export class SnapshotBuilder {
     }));
   }
 
-  /** Every scope × every period in which it has tallies, and every campaign. */
+  /** Every stored scope × every period from the network's first tally, and every campaign. */
   async rebuildAll(progress: Progress = () => Promise.resolve()): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async (transaction) => {
       const chapters = await this.chapters(transaction);
       const { fiscalYearStartMonth } = await this.settings.current();
-      const tallied = (
-        await this.select(
-          {
-            sql: 'SELECT chapter_id, DATE_FORMAT(month, :monthFormat) AS month FROM monthly_tallies',
-            replacements: { monthFormat: '%Y-%m' },
-          },
-          transaction,
-        )
-      ).map((row) => ({ chapterId: Number(row.chapter_id), month: String(row.month) }));
+      // Every tally in any state: what compliance and pending counts need, and which months exist.
+      const statuses = await this.statuses({}, transaction);
       // From the network's first tally to this month, months nobody filed count too.
-      const firstMonth = tallied.reduce<string | null>(
+      const firstMonth = statuses.reduce<string | null>(
         (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
         null,
       );
       const thisMonth = new Date().toISOString().slice(0, 7);
       const expected = firstMonth ? expectedChapterMonths(chapters, firstMonth, thisMonth) : [];
-      const targets = targetsOfMonths(chapters, [...tallied, ...expected], fiscalYearStartMonth);
+      const targets = targetsOfMonths(
+        chapters,
+        [...statuses, ...expected],
+        fiscalYearStartMonth,
+        STORED_SCOPES,
+      );
       await progress(10);
-      const built = await this.build(chapters, targets, {}, transaction);
+      const built = await this.build(chapters, targets, {}, transaction, statuses);
       await progress(40);
       const asOf = new Date();
       await this.writeSnapshots(built, asOf, transaction, async (done) =>
@@ -217,23 +204,24 @@ export class SnapshotBuilder {
     targets: SnapshotTarget[],
     filter: FactsFilter,
     transaction: Transaction,
+    statuses?: TallyStatus[],
   ): Promise<BuiltSnapshot[]> {
-    const facts = (await this.select(chapterMonthFactsSql(filter), transaction)).map(factFromRow);
-    const statuses: TallyStatus[] = (await this.select(tallyStatusSql(filter), transaction)).map(
-      (row) => ({
-        chapterId: Number(row.chapter_id),
-        month: String(row.month),
-        firstSubmittedAt: isoTimestamp(row.first_submitted_at),
-        pending: Number(row.pending) === 1,
-      }),
-    );
+    const facts = (await selectRows(transaction, chapterMonthFactsSql(filter))).map(factFromRow);
     const today = new Date().toISOString().slice(0, 10);
-    return rollUpSnapshots({ facts, chapters, statuses, today }, targets);
+    return rollUpSnapshots(
+      { facts, chapters, statuses: statuses ?? (await this.statuses(filter, transaction)), today },
+      targets,
+    );
+  }
+
+  private async statuses(filter: FactsFilter, transaction: Transaction): Promise<TallyStatus[]> {
+    return (await selectRows(transaction, tallyStatusSql(filter))).map(tallyStatusFromRow);
   }
 
   /**
-   * Upserts snapshots in multi-row statements of plain SQL: a full rebuild writes a row per
-   * scope × period, and building model instances for each would cost more than the SQL itself.
+   * Upserts snapshots in the driver's bulk protocol: a full rebuild writes a row per stored scope
+   * × period, megabytes of JSON in all, and model instances or escaped SQL text for each would
+   * cost more than the writes themselves.
    */
   private async writeSnapshots(
     built: BuiltSnapshot[],
@@ -241,34 +229,35 @@ export class SnapshotBuilder {
     transaction: Transaction,
     progress: (done: number) => Promise<unknown> = () => Promise.resolve(),
   ): Promise<void> {
+    // As UTC text: the driver's bulk protocol would send a Date in the process's time zone.
+    const asOfText = asOf.toISOString().slice(0, 23).replace('T', ' ');
     for (let start = 0; start < built.length; start += WRITE_CHUNK) {
       const chunk = built.slice(start, start + WRITE_CHUNK);
-      const values: unknown[] = [];
-      for (const snapshot of chunk) {
-        const { fromDate, toDate } = periodDates(snapshot.period);
-        values.push(
-          snapshot.scope,
-          snapshot.scopeId,
-          snapshot.period.kind,
-          snapshot.period.key,
-          fromDate,
-          toDate,
-          JSON.stringify(snapshot.figures),
-          JSON.stringify(snapshot.compliance),
-          snapshot.pendingTallies,
-          JSON.stringify(snapshot.sourceRevisions),
-          asOf,
-        );
-      }
-      await this.sequelize.query(
+      await batchRows(
+        transaction,
         `INSERT INTO report_snapshots (scope, scope_id, period_kind, period_key, period_from,
            period_to, figures, compliance, pending_tallies, source_revisions, as_of)
-         VALUES ${chunk.map(() => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}
+         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
          ON DUPLICATE KEY UPDATE period_from = VALUES(period_from), period_to = VALUES(period_to),
            figures = VALUES(figures), compliance = VALUES(compliance),
            pending_tallies = VALUES(pending_tallies), source_revisions = VALUES(source_revisions),
            as_of = VALUES(as_of)`,
-        { replacements: values, transaction },
+        chunk.map((snapshot) => {
+          const { fromDate, toDate } = periodDates(snapshot.period);
+          return [
+            snapshot.scope,
+            snapshot.scopeId,
+            snapshot.period.kind,
+            snapshot.period.key,
+            fromDate,
+            toDate,
+            JSON.stringify(snapshot.figures),
+            JSON.stringify(snapshot.compliance),
+            snapshot.pendingTallies,
+            JSON.stringify(snapshot.sourceRevisions),
+            asOfText,
+          ];
+        }),
       );
       await progress(start + chunk.length);
     }
@@ -308,13 +297,7 @@ export class SnapshotBuilder {
   }
 
   private async chapters(transaction: Transaction): Promise<ChapterInfo[]> {
-    return (await this.select(chaptersSql(), transaction)).map((row) => ({
-      chapterId: Number(row.chapter_id),
-      regionId: Number(row.region_id),
-      dueDay: Number(row.reporting_due_day),
-      activeFrom: isoDate(row.active_from)!,
-      activeTo: isoDate(row.active_to),
-    }));
+    return (await this.select(chaptersSql(), transaction)).map(chapterInfoFromRow);
   }
 
   private select(query: SqlQuery, transaction: Transaction): Promise<Row[]> {

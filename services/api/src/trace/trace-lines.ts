@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import type { SnapshotFigures, TraceTallyLine } from '@tallyloom/core';
-import { factColumnsSql, factFromRow } from '@tallyloom/reports';
+import { factColumnsSql, factFromRow, factJoinsSql } from '@tallyloom/reports';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { Actor } from '../common/access/actor';
@@ -32,6 +32,7 @@ function countedRevisionsSql(): string {
     'JOIN chapters c ON c.id = t.chapter_id',
     'JOIN regions g ON g.id = c.region_id',
     'LEFT JOIN users u ON u.id = r.approved_by',
+    factJoinsSql(),
     'WHERE r.tally_id IN (:tallyIds)',
   ].join('\n');
 }

@@ -7,6 +7,7 @@ import { ParcelReceipt } from '../receipts/models/parcel-receipt.model';
 import { ReceiptScan } from '../receipts/models/receipt-scan.model';
 import { Region } from '../regions/models/region.model';
 import { ReportSnapshot } from '../reports/models/report-snapshot.model';
+import { ReportsModule } from '../reports/reports.module';
 import { SettingsModule } from '../settings/settings.module';
 import { MonthlyTally } from '../tallies/models/monthly-tally.model';
 import { TallyBlanketsAssembled } from '../tallies/models/tally-blankets-assembled.model';
@@ -40,6 +41,7 @@ import { TraceSubjects } from './trace-subject';
       PartnerAgency,
     ]),
     SettingsModule,
+    ReportsModule,
   ],
   controllers: [TraceController],
   providers: [

@@ -3,12 +3,15 @@ import { InjectModel } from '@nestjs/sequelize';
 import {
   can,
   TRACE_MEASURES,
+  type Period,
   type SnapshotFigures,
+  type SnapshotScope,
   type TraceReceipt,
   type TraceView,
 } from '@tallyloom/core';
 import type { Actor } from '../common/access/actor';
 import { jsonColumn } from '../dashboards/snapshot-rows';
+import { ChapterFigures } from '../reports/chapter-figures.service';
 import { ReportSnapshot } from '../reports/models/report-snapshot.model';
 import { SettingsService } from '../settings/settings.service';
 import type { TraceQuery } from './dto/trace.query';
@@ -32,6 +35,7 @@ export class TraceService {
     private readonly lines: TraceLines,
     private readonly amendments: TraceAmendments,
     private readonly receipts: TraceReceipts,
+    private readonly chapters: ChapterFigures,
   ) {}
 
   async trace(actor: Actor, reference: string, query: TraceQuery): Promise<TraceView> {
@@ -39,23 +43,8 @@ export class TraceService {
     const target = traceTargetOf(reference, fiscalYearStartMonth);
     const subject = await this.subjects.resolve(actor, target);
     const { period } = target;
-    const snapshot = await this.snapshots.findOne({
-      where: {
-        scope: subject.scope,
-        scopeId: subject.scopeId ?? 0,
-        periodKind: period.kind,
-        periodKey: period.key,
-      },
-    });
-    if (!snapshot) {
-      throw new NotFoundException(
-        `No report snapshot of ${subject.scopeName} for ${period.label} has been built.`,
-      );
-    }
-    const counted = await this.lines.read(
-      actor,
-      jsonColumn<Array<[number, number]>>(snapshot.sourceRevisions),
-    );
+    const snapshot = await this.snapshotOf(subject, period);
+    const counted = await this.lines.read(actor, snapshot.sourceRevisions);
     const [amendments, receipts] = await Promise.all([
       this.amendments.of(counted),
       // Every role that reads tallies reads receipts today; the check keeps the two apart.
@@ -64,7 +53,7 @@ export class TraceService {
         : new Map<string, TraceReceipt[]>(),
     ]);
     const measures = query.measure ? [query.measure] : TRACE_MEASURES;
-    const figure = pickMeasures(jsonColumn<SnapshotFigures>(snapshot.figures), measures);
+    const figure = pickMeasures(snapshot.figures, measures);
     const recomputed = pickMeasures(recomputeFigures(counted), measures);
     return {
       reference: target.reference,
@@ -74,7 +63,7 @@ export class TraceService {
       figure,
       recomputed,
       agrees: sameFigures(figure, recomputed, measures),
-      asOf: snapshot.asOf.toISOString(),
+      asOf: snapshot.asOf,
       tallies: counted.map((line) => ({
         tallyId: line.tallyId,
         chapterId: line.chapterId,
@@ -89,5 +78,44 @@ export class TraceService {
         receipts: receipts.get(chapterMonthKey(line.chapterId, line.month)) ?? [],
       })),
     };
+  }
+
+  /**
+   * The figures as the dashboards show them: a region's or the network's stored row, a
+   * chapter's built now from its tallies (chapters have no stored rows).
+   */
+  private async snapshotOf(
+    subject: { scope: SnapshotScope; scopeId: number | null; scopeName: string },
+    period: Period,
+  ): Promise<{ figures: SnapshotFigures; sourceRevisions: Array<[number, number]>; asOf: string }> {
+    if (subject.scope === 'chapter') {
+      const [built] = await this.chapters.build([subject.scopeId!], [period]);
+      if (built) {
+        return {
+          figures: built.figures,
+          sourceRevisions: built.sourceRevisions,
+          asOf: new Date().toISOString(),
+        };
+      }
+    } else {
+      const stored = await this.snapshots.findOne({
+        where: {
+          scope: subject.scope,
+          scopeId: subject.scopeId ?? 0,
+          periodKind: period.kind,
+          periodKey: period.key,
+        },
+      });
+      if (stored) {
+        return {
+          figures: jsonColumn<SnapshotFigures>(stored.figures),
+          sourceRevisions: jsonColumn<Array<[number, number]>>(stored.sourceRevisions),
+          asOf: stored.asOf.toISOString(),
+        };
+      }
+    }
+    throw new NotFoundException(
+      `No report snapshot of ${subject.scopeName} for ${period.label} has been built.`,
+    );
   }
 }
