@@ -7,6 +7,7 @@ import { createMonthlyTallies } from './20261202-0005-create-monthly-tallies';
 import { createReportSnapshots } from './20261202-0006-create-report-snapshots';
 import { createExports } from './20261202-0007-create-exports';
 import { createAuditSamples } from './20261202-0008-create-audit-samples';
+import { createFindings } from './20261203-0010-create-findings';
 import { liveChapterFigures } from './20261203-0012-live-chapter-figures';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
@@ -19,5 +20,6 @@ export const MIGRATIONS: Migration[] = [
   createReportSnapshots,
   createExports,
   createAuditSamples,
+  createFindings,
   liveChapterFigures,
 ];

@@ -168,6 +168,13 @@ describe('every route × every role × in and out of scope', () => {
       inScope: `${noSuchSample}/items/1/attachment?`,
       outOfScope: `${noSuchSample}/items/1/attachment?`,
     };
+    // Findings are network-wide, read by admins, staff and auditors only; an unknown one stands in.
+    for (const path of [
+      '/api/findings/:id',
+      '/api/findings/:id/responses',
+      '/api/findings/:id/close',
+    ])
+      params[path] = { inScope: noSuchSample, outOfScope: noSuchSample };
     // A trace reference names its scope: a month of the home chapter, and of the away one.
     params['/api/trace/:reference'] = {
       inScope: `chapter:${home.chapters[0].id}:2024-01`,

@@ -28,6 +28,7 @@ import { ExportsModule } from './exports/exports.module';
 import { ImpactPackModule } from './impact-pack/impact-pack.module';
 import { AuditSamplingModule } from './audit-sampling/audit-sampling.module';
 import { TraceModule } from './trace/trace.module';
+import { FindingsModule } from './findings/findings.module';
 
 export interface AppModuleOptions {
   /** `npm run worker`: job processors always on, whatever JOB_PROCESSORS says, and no web app. */
@@ -96,6 +97,7 @@ export class AppModule {
         ImpactPackModule,
         AuditSamplingModule,
         TraceModule,
+        FindingsModule,
         ...(processors ? PROCESSOR_MODULES : []),
       ],
     };
