@@ -73,25 +73,38 @@ export function factJoinsSql(): string {
 }
 
 /**
+ * Each flow measure's fact column: [column name, SQL over the revision `r` and the derived
+ * tables of `factJoinsSql`]. Stock is not here: it is a level, read from the closing columns.
+ */
+export function flowColumns(): Array<[string, string]> {
+  return [
+    ['panels_accepted', 'r.panels_accepted'],
+    [
+      'panels_set_aside',
+      'r.set_aside_off_size + r.set_aside_hard_care + r.set_aside_soiled + r.set_aside_other',
+    ],
+    ['panels_used', 'r.panels_used'],
+    ['blankets_assembled', 'COALESCE(fa.total, 0)'],
+    ['blankets_received', 'r.blankets_received'],
+    ['blankets_given', 'COALESCE(fg.total, 0)'],
+    ['people_served', 'COALESCE(fp.total, 0)'],
+    ...PEOPLE_GROUPS.map((group): [string, string] => [
+      PEOPLE_GROUP_COLUMNS[group],
+      `COALESCE(fp.${groupColumn(group)}, 0)`,
+    ]),
+    ['volunteer_hours', 'r.volunteer_hours'],
+    ['yarn_kg', 'COALESCE(r.yarn_kg, 0)'],
+  ];
+}
+
+/**
  * Every measure's fact column of the revision aliased `r` and the derived tables of
  * `factJoinsSql`, as `factFromRow` reads them. Shared by the snapshot facts and the trace, so a
  * traced line adds exactly what the snapshot builder added.
  */
 export function factColumnsSql(): string {
-  const people = PEOPLE_GROUPS.map(
-    (group) => `COALESCE(fp.${groupColumn(group)}, 0) AS ${PEOPLE_GROUP_COLUMNS[group]}`,
-  );
   return [
-    '  r.panels_accepted,',
-    '  r.set_aside_off_size + r.set_aside_hard_care + r.set_aside_soiled + r.set_aside_other AS panels_set_aside,',
-    '  r.panels_used,',
-    '  COALESCE(fa.total, 0) AS blankets_assembled,',
-    '  r.blankets_received,',
-    '  COALESCE(fg.total, 0) AS blankets_given,',
-    '  COALESCE(fp.total, 0) AS people_served,',
-    ...people.map((column) => `  ${column},`),
-    '  r.volunteer_hours,',
-    '  COALESCE(r.yarn_kg, 0) AS yarn_kg,',
+    ...flowColumns().map(([column, expression]) => `  ${expression} AS ${column},`),
     '  r.panels_closing, r.blankets_closing',
   ].join('\n');
 }
@@ -138,32 +151,80 @@ function numberOf(row: FactRow, column: string): number {
   return value;
 }
 
-/** Reads a row of `chapterMonthFactsSql` into a fact (one approved tally). */
-export function factFromRow(row: FactRow): ChapterMonthFact {
+/**
+ * The flow figures of a row with `flowColumns` (a chapter-month, or their sum), with
+ * `approvedTallies` from its column when summed, else 1; stock from the closing columns if any.
+ */
+export function figuresFromRow(row: FactRow): SnapshotFigures {
   const byGroup = Object.fromEntries(
     PEOPLE_GROUPS.map((group) => [group, numberOf(row, PEOPLE_GROUP_COLUMNS[group])]),
   ) as Record<PeopleGroup, number>;
+  return {
+    ...emptySnapshotFigures(),
+    panelsAccepted: numberOf(row, 'panels_accepted'),
+    panelsSetAside: numberOf(row, 'panels_set_aside'),
+    panelsUsed: numberOf(row, 'panels_used'),
+    blanketsAssembled: numberOf(row, 'blankets_assembled'),
+    blanketsReceived: numberOf(row, 'blankets_received'),
+    blanketsGiven: numberOf(row, 'blankets_given'),
+    peopleServed: numberOf(row, 'people_served'),
+    peopleServedByGroup: byGroup,
+    volunteerHours: numberOf(row, 'volunteer_hours'),
+    yarnKg: numberOf(row, 'yarn_kg'),
+    panelsInStock: numberOf(row, 'panels_closing'),
+    blanketsInStock: numberOf(row, 'blankets_closing'),
+    approvedTallies: 'approved_tallies' in row ? numberOf(row, 'approved_tallies') : 1,
+  };
+}
+
+/** Reads a row of `chapterMonthFactsSql` into a fact (one approved tally). */
+export function factFromRow(row: FactRow): ChapterMonthFact {
   return {
     chapterId: numberOf(row, 'chapter_id'),
     regionId: numberOf(row, 'region_id'),
     month: String(row.month),
     tallyId: numberOf(row, 'tally_id'),
     revision: numberOf(row, 'revision'),
-    figures: {
-      ...emptySnapshotFigures(),
-      panelsAccepted: numberOf(row, 'panels_accepted'),
-      panelsSetAside: numberOf(row, 'panels_set_aside'),
-      panelsUsed: numberOf(row, 'panels_used'),
-      blanketsAssembled: numberOf(row, 'blankets_assembled'),
-      blanketsReceived: numberOf(row, 'blankets_received'),
-      blanketsGiven: numberOf(row, 'blankets_given'),
-      peopleServed: numberOf(row, 'people_served'),
-      peopleServedByGroup: byGroup,
-      volunteerHours: numberOf(row, 'volunteer_hours'),
-      yarnKg: numberOf(row, 'yarn_kg'),
-      panelsInStock: numberOf(row, 'panels_closing'),
-      blanketsInStock: numberOf(row, 'blankets_closing'),
-      approvedTallies: 1,
-    },
+    figures: figuresFromRow(row),
+  };
+}
+
+/**
+ * One SELECT yielding the flows of each region and month, summed in SQL over the same approved
+ * revisions and fact columns as `chapterMonthFactsSql`: a full rebuild needs chapters only for
+ * stock, compliance and sources (see `tallyStatusSql`), so it lets the database add the flows.
+ */
+export function regionMonthFlowsSql(filter: FactsFilter = {}): SqlQuery {
+  const { where, replacements } = filterClauses(filter, 't');
+  const sql = [
+    'SELECT c.region_id, DATE_FORMAT(t.month, :monthFormat) AS month,',
+    ...flowColumns().map(([column, expression]) => `  SUM(${expression}) AS ${column},`),
+    '  COUNT(*) AS approved_tallies',
+    'FROM monthly_tallies t',
+    'JOIN chapters c ON c.id = t.chapter_id',
+    'JOIN tally_revisions r ON r.tally_id = t.id AND r.revision = t.approved_revision',
+    factJoinsSql(),
+    `WHERE ${['t.approved_revision IS NOT NULL', ...where].join(' AND ')}`,
+    'GROUP BY c.region_id, t.month',
+  ].join('\n');
+  return { sql, replacements: { ...replacements, monthFormat: '%Y-%m' } };
+}
+
+/** The flows of one region (chapterId null) or one chapter in one month. */
+export interface MonthFlows {
+  chapterId: number | null;
+  regionId: number;
+  month: MonthKey;
+  /** Flows only: stock comes from each chapter's approved closing (TallyStatus.approved). */
+  figures: SnapshotFigures;
+}
+
+/** Reads a row of `regionMonthFlowsSql`. */
+export function regionMonthFlowsFromRow(row: FactRow): MonthFlows {
+  return {
+    chapterId: null,
+    regionId: numberOf(row, 'region_id'),
+    month: String(row.month),
+    figures: figuresFromRow(row),
   };
 }

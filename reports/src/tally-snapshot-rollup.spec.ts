@@ -1,8 +1,14 @@
-import { emptySnapshotFigures, quarterPeriod, type SnapshotFigures } from '@tallyloom/core';
-import type { ChapterMonthFact } from './chapter-month-facts';
+import {
+  addSnapshotFigures,
+  emptySnapshotFigures,
+  quarterPeriod,
+  type SnapshotFigures,
+} from '@tallyloom/core';
+import type { ChapterMonthFact, MonthFlows } from './chapter-month-facts';
 import {
   networkFromRegions,
   expectedChapterMonths,
+  inputFromFacts,
   rollUpSnapshots,
   targetsOfChapterMonth,
   targetsOfMonths,
@@ -35,7 +41,7 @@ const facts = [
   fact(1, '2026-02', 12, { panelsAccepted: 20, panelsInStock: 8, volunteerHours: 2.2 }),
   fact(2, '2026-03', 21, { panelsAccepted: 1, panelsInStock: 100 }),
 ];
-const statuses: TallyStatus[] = [
+const statuses: Array<Omit<TallyStatus, 'approved'>> = [
   { chapterId: 1, month: '2026-01', firstSubmittedAt: '2026-02-05T09:00:00Z', pending: false },
   { chapterId: 1, month: '2026-02', firstSubmittedAt: '2026-03-15T09:00:00Z', pending: false },
   { chapterId: 1, month: '2026-03', firstSubmittedAt: '2026-04-20T09:00:00Z', pending: true },
@@ -43,10 +49,13 @@ const statuses: TallyStatus[] = [
 ];
 const q1 = quarterPeriod('2026-Q1');
 const input = { facts, chapters, statuses, today: '2026-05-20' };
+/** The roll-up from chapter-month facts, as the live chapter figures call it. */
+const rollUp = (from: typeof input, targets: Parameters<typeof rollUpSnapshots>[1]) =>
+  rollUpSnapshots(inputFromFacts(from), targets);
 
 describe('rollUpSnapshots', () => {
   it("keeps a chapter's stock from its last approved month when a later month is not approved", () => {
-    const [chapter1] = rollUpSnapshots(input, [{ scope: 'chapter', scopeId: 1, period: q1 }]);
+    const [chapter1] = rollUp(input, [{ scope: 'chapter', scopeId: 1, period: q1 }]);
     expect(chapter1.figures).toMatchObject({
       panelsAccepted: 30,
       panelsInStock: 8,
@@ -62,14 +71,14 @@ describe('rollUpSnapshots', () => {
   });
 
   it('adds the chapters of a region, stock included, and expects only active months', () => {
-    const [region1] = rollUpSnapshots(input, [{ scope: 'region', scopeId: 1, period: q1 }]);
+    const [region1] = rollUp(input, [{ scope: 'region', scopeId: 1, period: q1 }]);
     expect(region1.figures).toMatchObject({ panelsAccepted: 31, panelsInStock: 108 });
     // Chapter 2 opened in March: one month expected of it.
     expect(region1.compliance).toEqual({ expected: 4, onTime: 2, late: 2, missing: 0, open: 0 });
   });
 
   it('counts missing months of a silent chapter in the network and leaves future months out', () => {
-    const [network] = rollUpSnapshots({ ...input, today: '2026-03-05' }, [
+    const [network] = rollUp({ ...input, today: '2026-03-05' }, [
       { scope: 'network', scopeId: 0, period: q1 },
     ]);
     // Chapter 3 never reported: Jan missing (due Feb 10); Feb still due until Mar 10; Mar upcoming.
@@ -79,7 +88,7 @@ describe('rollUpSnapshots', () => {
   });
 
   it('gives empty figures to a scope with nothing approved', () => {
-    const [region2] = rollUpSnapshots(input, [{ scope: 'region', scopeId: 2, period: q1 }]);
+    const [region2] = rollUp(input, [{ scope: 'region', scopeId: 2, period: q1 }]);
     expect(region2.figures).toEqual(emptySnapshotFigures());
     expect(region2.sourceRevisions).toEqual([]);
   });
@@ -156,12 +165,45 @@ describe('expectedChapterMonths', () => {
       expectedChapterMonths(chapters, '2026-03', '2026-03'),
       1,
     ).filter((target) => target.scope === 'chapter' && target.scopeId === 3);
-    const [march] = rollUpSnapshots(input, targets).filter(
-      (snapshot) => snapshot.period.key === '2026-03',
-    );
+    const [march] = rollUp(input, targets).filter((snapshot) => snapshot.period.key === '2026-03');
     expect(march.figures.approvedTallies).toBe(0);
     // Due 10 April, judged on 20 May: missing.
     expect(march.compliance).toMatchObject({ onTime: 0, late: 0, missing: 1, open: 0 });
+  });
+});
+
+describe('rollUpSnapshots from flows summed per region (the full rebuild)', () => {
+  it('gives every region and network snapshot the chapter-by-chapter roll-up gives', () => {
+    const targets = targetsOfMonths(
+      chapters,
+      [
+        ...facts.map(({ chapterId, month }) => ({ chapterId, month })),
+        ...expectedChapterMonths(chapters, '2026-01', '2026-05'),
+      ],
+      7,
+      ['region', 'network'],
+    );
+    const byChapter = rollUp(input, targets);
+    // What the database's GROUP BY region, month returns: flows only, one row per region-month.
+    const sums = new Map<string, MonthFlows>();
+    for (const fact of facts) {
+      const key = `${fact.regionId}:${fact.month}`;
+      const flows = { ...fact.figures, panelsInStock: 0, blanketsInStock: 0 };
+      const seen = sums.get(key);
+      sums.set(key, {
+        chapterId: null,
+        regionId: fact.regionId,
+        month: fact.month,
+        figures: seen ? addSnapshotFigures(seen.figures, flows) : flows,
+      });
+    }
+    const { statuses: withApproved } = inputFromFacts(input);
+    const byRegion = rollUpSnapshots(
+      { flows: [...sums.values()], chapters, statuses: withApproved, today: input.today },
+      targets,
+    );
+    expect(byRegion.length).toBeGreaterThan(6);
+    expect(byRegion).toEqual(byChapter);
   });
 });
 
@@ -176,7 +218,7 @@ describe('networkFromRegions', () => {
       ],
       7,
     );
-    const built = rollUpSnapshots(input, targets);
+    const built = rollUp(input, targets);
     const networks = built.filter((snapshot) => snapshot.scope === 'network');
     expect(networks.length).toBeGreaterThan(3);
     for (const network of networks) {

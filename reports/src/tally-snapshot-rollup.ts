@@ -20,7 +20,7 @@ import {
   type SnapshotFigures,
   type SnapshotScope,
 } from '@tallyloom/core';
-import type { ChapterMonthFact } from './chapter-month-facts';
+import type { ChapterMonthFact, MonthFlows } from './chapter-month-facts';
 
 export interface ChapterInfo {
   chapterId: number;
@@ -37,6 +37,16 @@ export interface TallyStatus {
   /** ISO timestamp, or null when never submitted. */
   firstSubmittedAt: string | null;
   pending: boolean;
+  /** The revision in force, when the tally has one approved: what the snapshot counts. */
+  approved: ApprovedRevision | null;
+}
+
+export interface ApprovedRevision {
+  tallyId: number;
+  revision: number;
+  /** Its closing stocks: a period's stock is each chapter's in its last approved month. */
+  panelsClosing: number;
+  blanketsClosing: number;
 }
 
 export interface SnapshotTarget {
@@ -63,11 +73,66 @@ export const STORED_SCOPES: readonly SnapshotScope[] = ['region', 'network'];
 const ALL_SCOPES: readonly SnapshotScope[] = ['chapter', 'region', 'network'];
 
 export interface RollupInput {
-  facts: readonly ChapterMonthFact[];
+  /**
+   * Flows of approved revisions by month: per chapter (for chapter snapshots) or already summed
+   * per region (enough for regions and the network).
+   */
+  flows: readonly MonthFlows[];
   chapters: readonly ChapterInfo[];
+  /** Every tally in any state: compliance, pending, stock and sources. */
   statuses: readonly TallyStatus[];
   /** ISO date: compliance is judged on this day, and later months are not expected yet. */
   today: string;
+}
+
+/**
+ * The roll-up's input from chapter-month facts (each an approved revision) and the tallies'
+ * statuses: what the live chapter figures and the tests have. A fact without a status row (a
+ * test's) counts as approved and never submitted.
+ */
+export function inputFromFacts(input: {
+  facts: readonly ChapterMonthFact[];
+  chapters: readonly ChapterInfo[];
+  statuses: ReadonlyArray<Omit<TallyStatus, 'approved'> & Partial<Pick<TallyStatus, 'approved'>>>;
+  today: string;
+}): RollupInput {
+  const key = (chapterId: number, month: MonthKey) => `${chapterId}:${month}`;
+  const factOf = new Map(input.facts.map((fact) => [key(fact.chapterId, fact.month), fact]));
+  const approvedOf = (fact: ChapterMonthFact | undefined): ApprovedRevision | null =>
+    fact
+      ? {
+          tallyId: fact.tallyId,
+          revision: fact.revision,
+          panelsClosing: fact.figures.panelsInStock,
+          blanketsClosing: fact.figures.blanketsInStock,
+        }
+      : null;
+  const statuses: TallyStatus[] = input.statuses.map((status) => ({
+    ...status,
+    approved: approvedOf(factOf.get(key(status.chapterId, status.month))),
+  }));
+  const withStatus = new Set(statuses.map((status) => key(status.chapterId, status.month)));
+  for (const fact of input.facts) {
+    if (withStatus.has(key(fact.chapterId, fact.month))) continue;
+    statuses.push({
+      chapterId: fact.chapterId,
+      month: fact.month,
+      firstSubmittedAt: null,
+      pending: false,
+      approved: approvedOf(fact),
+    });
+  }
+  return {
+    flows: input.facts.map((fact) => ({
+      chapterId: fact.chapterId,
+      regionId: fact.regionId,
+      month: fact.month,
+      figures: fact.figures,
+    })),
+    chapters: input.chapters,
+    statuses,
+    today: input.today,
+  };
 }
 
 /** What one scope's chapters add up to in one month: flows, compliance, pending, sources. */
@@ -103,11 +168,12 @@ function groupBy<T>(items: readonly T[], keyOf: (item: T) => number): Map<number
 }
 
 /**
- * Builds the snapshots asked for from the facts, chapters and statuses given. Each chapter-month
- * is added once into its scopes' month buckets (flows, compliance, pending, sources); a target
- * then adds up the buckets of its period's months. Stock is a level, not a flow: each chapter's
- * closing stock of its last approved month in the period is added to the period's targets
- * directly. Sums grow in place, because a full rebuild adds hundreds of thousands of months.
+ * Builds the snapshots asked for from the flows, chapters and statuses given. Each row of flows
+ * and each chapter-month's status is added once into its scopes' month buckets (flows,
+ * compliance, pending, sources); a target then adds up the buckets of its period's months.
+ * Stock is a level, not a flow: each chapter's closing stock of its last approved month in the
+ * period is added to the period's targets directly. Sums grow in place: a full rebuild adds
+ * tens of thousands of months.
  */
 export function rollUpSnapshots(
   input: RollupInput,
@@ -184,7 +250,18 @@ export function rollUpSnapshots(
   };
 
   const months = [...periodsOfMonth.keys()];
-  const factsOf = groupBy(input.facts, (fact) => fact.chapterId);
+  // Flows: each row into the month buckets of the scopes it covers (a region's sum has no
+  // chapter; a chapter's month counts for its chapter, region and the network).
+  for (const flows of input.flows) {
+    if (!periodsOfMonth.has(flows.month)) continue;
+    const covered = [scopeKey('region', flows.regionId), scopeKey('network', 0)];
+    if (flows.chapterId !== null) covered.push(scopeKey('chapter', flows.chapterId));
+    for (const scope of covered) {
+      if (!wantedScopes.has(scope)) continue;
+      addFlowsInPlace(bucketIn(bucketsOf(scope), flows.month).figures, flows.figures);
+    }
+  }
+
   const statusesOf = groupBy(input.statuses, (status) => status.chapterId);
   for (const chapter of input.chapters) {
     const scopes = [
@@ -195,37 +272,38 @@ export function rollUpSnapshots(
     if (scopes.length === 0) continue;
     const monthBuckets = scopes.map(bucketsOf);
 
-    const lastFactIn = new Map<Period, ChapterMonthFact>();
-    const facts = [...(factsOf.get(chapter.chapterId) ?? [])].sort((a, b) =>
-      a.month < b.month ? -1 : a.month > b.month ? 1 : 0,
-    );
-    for (const fact of facts) {
-      const periods = periodsOfMonth.get(fact.month);
+    const submittedAt = new Map<MonthKey, string | null>();
+    const lastApprovedIn = new Map<Period, { month: MonthKey; approved: ApprovedRevision }>();
+    for (const status of statusesOf.get(chapter.chapterId) ?? []) {
+      submittedAt.set(status.month, status.firstSubmittedAt);
+      const periods = periodsOfMonth.get(status.month);
       if (!periods) continue;
-      for (const period of periods) lastFactIn.set(period, fact);
+      if (status.pending) {
+        for (const inScope of monthBuckets) bucketIn(inScope, status.month).pendingTallies += 1;
+      }
+      const { approved } = status;
+      if (!approved) continue;
       for (const inScope of monthBuckets) {
-        const bucket = bucketIn(inScope, fact.month);
-        addFlowsInPlace(bucket.figures, fact.figures);
-        bucket.sources.push([fact.tallyId, fact.revision]);
+        bucketIn(inScope, status.month).sources.push([approved.tallyId, approved.revision]);
+      }
+      for (const period of periods) {
+        const last = lastApprovedIn.get(period);
+        if (!last || last.month < status.month) {
+          lastApprovedIn.set(period, { month: status.month, approved });
+        }
       }
     }
-    // The chapter's closing stock of its last approved month in each period.
-    for (const [period, fact] of lastFactIn) {
+    // Stock is a level: the chapter's closing stock of its last approved month in each period.
+    for (const [period, { approved }] of lastApprovedIn) {
       const inPeriod = byPeriod.get(periodId(period))!;
       for (const scope of scopes) {
         const snapshot = inPeriod.get(scope);
         if (!snapshot) continue;
-        snapshot.figures.panelsInStock += fact.figures.panelsInStock;
-        snapshot.figures.blanketsInStock += fact.figures.blanketsInStock;
+        snapshot.figures.panelsInStock += approved.panelsClosing;
+        snapshot.figures.blanketsInStock += approved.blanketsClosing;
       }
     }
 
-    const submittedAt = new Map<MonthKey, string | null>();
-    for (const status of statusesOf.get(chapter.chapterId) ?? []) {
-      submittedAt.set(status.month, status.firstSubmittedAt);
-      if (!status.pending || !periodsOfMonth.has(status.month)) continue;
-      for (const inScope of monthBuckets) bucketIn(inScope, status.month).pendingTallies += 1;
-    }
     for (const month of months) {
       if (month > currentMonth || !isActiveIn(chapter, month)) continue;
       const field =

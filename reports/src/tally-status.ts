@@ -39,7 +39,8 @@ export interface TallyStatusFilter extends ChapterFilter {
 
 /**
  * One row per monthly tally in any state: chapter_id, month ('YYYY-MM'), first_submitted_at
- * (for on time / late) and pending (1 when filed but its figures are not approved).
+ * (for on time / late), pending (1 when filed but its figures are not approved), and when it has
+ * an approved revision: tally_id, approved_revision and that revision's closing stocks.
  */
 export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
   const where: string[] = [];
@@ -66,8 +67,12 @@ export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
       // gets the same value whatever its driver's date decoding.
       'SELECT t.chapter_id, DATE_FORMAT(t.month, :monthFormat) AS month,',
       '  DATE_FORMAT(t.first_submitted_at, :timeFormat) AS first_submitted_at,',
-      `  CASE WHEN ${PENDING_TALLY_CONDITION} THEN 1 ELSE 0 END AS pending`,
+      `  CASE WHEN ${PENDING_TALLY_CONDITION} THEN 1 ELSE 0 END AS pending,`,
+      // The approved revision's closing stock and identity: a period's stock is each chapter's
+      // closing in its last approved month, and a snapshot names the revisions it counts.
+      '  t.id AS tally_id, t.approved_revision, r.panels_closing, r.blankets_closing',
       'FROM monthly_tallies t',
+      'LEFT JOIN tally_revisions r ON r.tally_id = t.id AND r.revision = t.approved_revision',
       where.length > 0 ? `WHERE ${where.join(' AND ')}` : '',
       'ORDER BY t.chapter_id, t.month',
     ].join('\n'),

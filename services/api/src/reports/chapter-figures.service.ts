@@ -5,6 +5,7 @@ import {
   chapterMonthFactsSql,
   chaptersSql,
   factFromRow,
+  inputFromFacts,
   monthRangeOf,
   rollUpSnapshots,
   tallyStatusSql,
@@ -51,7 +52,7 @@ export class ChapterFigures {
         const known = new Set(chapters.map((chapter) => chapter.chapterId));
         const today = new Date().toISOString().slice(0, 10);
         return rollUpSnapshots(
-          { facts, chapters, statuses, today },
+          inputFromFacts({ facts, chapters, statuses, today }),
           targets.filter((target) => known.has(target.scopeId)),
         );
       },

@@ -6,12 +6,12 @@ import {
   campaignCreditFromRow,
   campaignCreditSql,
   campaignsOfChapterMonthSql,
-  chapterMonthFactsSql,
   chaptersSql,
   expectedChapterMonths,
-  factFromRow,
   monthRangeOf,
   networkFromRegions,
+  regionMonthFlowsFromRow,
+  regionMonthFlowsSql,
   rollUpSnapshots,
   STORED_SCOPES,
   tallyStatusSql,
@@ -206,10 +206,13 @@ export class SnapshotBuilder {
     transaction: Transaction,
     statuses?: TallyStatus[],
   ): Promise<BuiltSnapshot[]> {
-    const facts = (await selectRows(transaction, chapterMonthFactsSql(filter))).map(factFromRow);
+    // Regions and the network need no chapter's flows: the database sums them per region.
+    const flows = (await selectRows(transaction, regionMonthFlowsSql(filter))).map(
+      regionMonthFlowsFromRow,
+    );
     const today = new Date().toISOString().slice(0, 10);
     return rollUpSnapshots(
-      { facts, chapters, statuses: statuses ?? (await this.statuses(filter, transaction)), today },
+      { flows, chapters, statuses: statuses ?? (await this.statuses(filter, transaction)), today },
       targets,
     );
   }

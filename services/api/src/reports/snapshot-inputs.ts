@@ -36,5 +36,14 @@ export function tallyStatusFromRow(row: Row): TallyStatus {
     month: String(row.month),
     firstSubmittedAt: isoTimestamp(row.first_submitted_at),
     pending: Number(row.pending) === 1,
+    approved:
+      row.approved_revision === null || row.approved_revision === undefined
+        ? null
+        : {
+            tallyId: Number(row.tally_id),
+            revision: Number(row.approved_revision),
+            panelsClosing: Number(row.panels_closing),
+            blanketsClosing: Number(row.blankets_closing),
+          },
   };
 }
