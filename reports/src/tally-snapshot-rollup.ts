@@ -143,14 +143,6 @@ interface MonthBucket {
   sources: Array<[number, number]>;
 }
 
-/** True when the chapter is active on some day of the month. */
-export function isActiveIn(chapter: ChapterInfo, month: MonthKey): boolean {
-  return (
-    chapter.activeFrom.slice(0, 7) <= month &&
-    (chapter.activeTo === null || chapter.activeTo.slice(0, 7) >= month)
-  );
-}
-
 const targetKey = (target: SnapshotTarget) =>
   `${target.scope}:${target.scopeId}:${target.period.kind}:${target.period.key}`;
 const periodId = (period: Pick<Period, 'kind' | 'key'>) => `${period.kind}:${period.key}`;
@@ -185,6 +177,8 @@ export function rollUpSnapshots(
   const built = new Map<string, BuiltSnapshot>();
   // Targets by period and scope; the periods each month falls in; the scopes anyone asked for.
   const byPeriod = new Map<string, Map<string, BuiltSnapshot>>();
+  // The same maps by the Period object itself, for the per-chapter loops (no key to build).
+  const scopesOfPeriod = new Map<Period, Map<string, BuiltSnapshot>>();
   const periodsOfMonth = new Map<MonthKey, Period[]>();
   const wantedScopes = new Set<string>();
   for (const [key, target] of unique) {
@@ -201,6 +195,7 @@ export function rollUpSnapshots(
     if (!scopes) {
       scopes = new Map();
       byPeriod.set(periodId(target.period), scopes);
+      scopesOfPeriod.set(target.period, scopes);
       for (const month of monthsOf(target.period)) {
         const periods = periodsOfMonth.get(month);
         if (periods) periods.push(target.period);
@@ -295,7 +290,7 @@ export function rollUpSnapshots(
     }
     // Stock is a level: the chapter's closing stock of its last approved month in each period.
     for (const [period, { approved }] of lastApprovedIn) {
-      const inPeriod = byPeriod.get(periodId(period))!;
+      const inPeriod = scopesOfPeriod.get(period)!;
       for (const scope of scopes) {
         const snapshot = inPeriod.get(scope);
         if (!snapshot) continue;
@@ -304,8 +299,11 @@ export function rollUpSnapshots(
       }
     }
 
+    const activeFrom = chapter.activeFrom.slice(0, 7);
+    const activeTo = chapter.activeTo?.slice(0, 7) ?? currentMonth;
+    const lastExpected = activeTo < currentMonth ? activeTo : currentMonth;
     for (const month of months) {
-      if (month > currentMonth || !isActiveIn(chapter, month)) continue;
+      if (month < activeFrom || month > lastExpected) continue;
       const field =
         COMPLIANCE_FIELD[statusOf(month, chapter.dueDay, submittedAt.get(month) ?? null)];
       for (const inScope of monthBuckets) {
@@ -327,7 +325,8 @@ export function rollUpSnapshots(
       snapshot.pendingTallies += bucket.pendingTallies;
       for (const source of bucket.sources) snapshot.sourceRevisions.push(source);
     }
-    snapshot.sourceRevisions.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
+    // A snapshot counts one revision per tally, so the tally id alone orders them.
+    snapshot.sourceRevisions.sort((a, b) => a[0] - b[0]);
   }
   return [...built.values()];
 }
@@ -408,16 +407,21 @@ export function targetsOfMonths(
     targets.set(targetKey(target), target);
   };
   // Each scope × month once: a full rebuild passes every chapter-month of the network.
-  const seen = new Set<string>();
+  const seen = new Map<string, Set<MonthKey>>();
   const periodsOf = new Map<MonthKey, Period[]>();
   for (const { chapterId, month } of tallied) {
     const regionId = regionOf.get(chapterId);
     if (regionId === undefined) continue;
     for (const scope of scopes) {
       const scopeId = holding(scope, { chapterId, regionId });
-      const key = `${scope}:${scopeId}:${month}`;
-      if (seen.has(key)) continue;
-      seen.add(key);
+      const key = scope === 'network' ? scope : scope === 'region' ? `r${scopeId}` : `c${scopeId}`;
+      let months = seen.get(key);
+      if (!months) {
+        months = new Set();
+        seen.set(key, months);
+      }
+      if (months.has(month)) continue;
+      months.add(month);
       let periods = periodsOf.get(month);
       if (!periods) {
         periods = periodsContaining(month, fiscalYearStartMonth);

@@ -21,6 +21,7 @@ import {
   type BuiltSnapshot,
   type ChapterInfo,
   type FactsFilter,
+  type MonthFlows,
   type RegionPart,
   type SnapshotTarget,
   type SqlQuery,
@@ -168,23 +169,33 @@ export class SnapshotBuilder {
     return this.lockedThenInvalidate(async (transaction) => {
       const chapters = await this.chapters(transaction);
       const { fiscalYearStartMonth } = await this.settings.current();
-      // Every tally in any state: what compliance and pending counts need, and which months exist.
-      const statuses = await this.statuses({}, transaction);
-      // From the network's first tally to this month, months nobody filed count too.
-      const firstMonth = statuses.reduce<string | null>(
-        (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
-        null,
-      );
-      const thisMonth = new Date().toISOString().slice(0, 7);
-      const expected = firstMonth ? expectedChapterMonths(chapters, firstMonth, thisMonth) : [];
-      const targets = targetsOfMonths(
-        chapters,
-        [...statuses, ...expected],
-        fiscalYearStartMonth,
-        STORED_SCOPES,
-      );
+      // The flows' GROUP BY is the longest read: it runs on a connection of its own while the
+      // statuses are read and the targets worked out. Each statement of a READ COMMITTED
+      // transaction sees what was committed when it began, so this is no less consistent, and a
+      // tally approved meanwhile queues its own rebuild, which waits for this one's lock.
+      const flowsRead = this.regionFlows({});
+      const prepared = (async () => {
+        // Every tally in any state: compliance, pending, stock, sources, and which months exist.
+        const statuses = await this.statuses({}, transaction);
+        // From the network's first tally to this month, months nobody filed count too.
+        const firstMonth = statuses.reduce<string | null>(
+          (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
+          null,
+        );
+        const thisMonth = new Date().toISOString().slice(0, 7);
+        const expected = firstMonth ? expectedChapterMonths(chapters, firstMonth, thisMonth) : [];
+        const targets = targetsOfMonths(
+          chapters,
+          [...statuses, ...expected],
+          fiscalYearStartMonth,
+          STORED_SCOPES,
+        );
+        return { statuses, targets };
+      })();
+      const [flows, { statuses, targets }] = await Promise.all([flowsRead, prepared]);
       await progress(10);
-      const built = await this.build(chapters, targets, {}, transaction, statuses);
+      const today = new Date().toISOString().slice(0, 10);
+      const built = rollUpSnapshots({ flows, chapters, statuses, today }, targets);
       await progress(40);
       const asOf = new Date();
       await this.writeSnapshots(built, asOf, transaction, async (done) =>
@@ -204,17 +215,28 @@ export class SnapshotBuilder {
     targets: SnapshotTarget[],
     filter: FactsFilter,
     transaction: Transaction,
-    statuses?: TallyStatus[],
   ): Promise<BuiltSnapshot[]> {
-    // Regions and the network need no chapter's flows: the database sums them per region.
     const flows = (await selectRows(transaction, regionMonthFlowsSql(filter))).map(
       regionMonthFlowsFromRow,
     );
     const today = new Date().toISOString().slice(0, 10);
     return rollUpSnapshots(
-      { flows, chapters, statuses: statuses ?? (await this.statuses(filter, transaction)), today },
+      { flows, chapters, statuses: await this.statuses(filter, transaction), today },
       targets,
     );
+  }
+
+  /**
+   * Regions and the network need no chapter's flows: the database sums them per region and
+   * month (a few rows per region and month, so Sequelize's reading costs nothing here).
+   */
+  private async regionFlows(filter: FactsFilter): Promise<MonthFlows[]> {
+    const query = regionMonthFlowsSql(filter);
+    const rows = await this.sequelize.query<Record<string, unknown>>(query.sql, {
+      type: QueryTypes.SELECT,
+      replacements: query.replacements,
+    });
+    return rows.map(regionMonthFlowsFromRow);
   }
 
   private async statuses(filter: FactsFilter, transaction: Transaction): Promise<TallyStatus[]> {
