@@ -2,7 +2,7 @@ import { appSecrets } from '../../db/lifecycle/app-secrets';
 import { LifecycleError, exitWith, step } from '../../db/lifecycle/console';
 import { findFreePort } from '../../db/lifecycle/ports';
 import { runCommand, startLongRunning, stopLongRunning } from '../../db/lifecycle/run-command';
-import { startServers, throwawayRoot } from '../../db/lifecycle/servers';
+import { startServers, throwawayRoot, type ServerEnv } from '../../db/lifecycle/servers';
 import { join } from 'node:path';
 import { onShutdown, shutdown } from '../../db/lifecycle/shutdown';
 import { waitForHttp } from '../../db/lifecycle/wait-for-http';
@@ -10,7 +10,7 @@ import { DEMO_SIGN_INS } from '../../db/seeders/demo-sign-ins';
 import { load } from './load';
 import { benchExports } from './exports-bench';
 import { benchReports } from './reports-bench';
-import { sizeFromArgs } from './synthetic-network';
+import { sizeFromArgs, type NetworkSize } from './synthetic-network';
 
 /**
  * `npm run bench`: the production build of the API on throwaway servers, measured as ratios
@@ -21,6 +21,8 @@ async function main(): Promise<void> {
   const seconds = Number(process.env.BENCH_SECONDS ?? 5);
   const connections = Number(process.env.BENCH_CONNECTIONS ?? 20);
   const size = sizeFromArgs(process.argv.slice(2));
+  // `--only exports`: the exports section alone, on a synthetic network it generates itself.
+  const exportsOnly = process.argv.slice(2).join(' ').includes('--only exports');
   const env = await startServers('throwaway');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'migrate'], env, 'Migrations');
   await runCommand('npx', ['tsx', 'db/cli.ts', 'seed'], env, 'Demo seed');
@@ -64,6 +66,7 @@ async function main(): Promise<void> {
   });
   const { accessToken } = (await signIn.json()) as { accessToken: string };
   const auth = { authorization: `Bearer ${accessToken}` };
+  if (exportsOnly) return exportsSection(env, staff.email, size);
 
   step(`Load: ${connections} connections × ${seconds} s per route…`);
   await load(baseUrl, '/api/health', connections, 1); // warm-up
@@ -99,12 +102,18 @@ async function main(): Promise<void> {
   });
   console.table(reports.rows);
 
+  await exportsSection(env, staff.email);
+}
+
+async function exportsSection(env: ServerEnv, staffEmail: string, generate?: NetworkSize) {
+  Object.assign(process.env, env, appSecrets(false), { NODE_ENV: 'production', LOG_LEVEL: 'warn' });
   step('Exports of the synthetic receipts (staff, every column)…');
   const exportRows = await benchExports({
     databaseUrl: env.DATABASE_URL,
-    staffEmail: staff.email,
+    staffEmail,
     sizes: exportSizes(process.argv.slice(2)),
     folder: join(throwawayRoot(), 'bench-exports'),
+    generate: generate && { generatorUrl: env.DATABASE_MIGRATION_URL, size: generate },
   });
   console.table(exportRows);
 }

@@ -52,10 +52,18 @@ export function receiptListOrder(keys: ReceiptSortKey[]): Order {
   );
 }
 
-/** The `where` key of each sort attribute (the chapter's name through the included chapter). */
-export const RECEIPT_SORT_COLUMNS: Record<ReceiptSortAttribute, string> = {
-  receivedOn: 'receivedOn',
-  panelsAccepted: 'panelsAccepted',
-  chapterName: '$chapter.name$',
-  id: 'id',
+/**
+ * Each sort attribute as SQL over the list's query, whose receipt is `ParcelReceipt` and its
+ * chapter `chapter` (Sequelize's aliases): for reads that stream the list in its own order.
+ */
+export const RECEIPT_SORT_SQL: Record<ReceiptSortAttribute, string> = {
+  receivedOn: '`ParcelReceipt`.`received_on`',
+  panelsAccepted: '`ParcelReceipt`.`panels_accepted`',
+  chapterName: '`chapter`.`name`',
+  id: '`ParcelReceipt`.`id`',
 };
+
+/** The list's order as an SQL ORDER BY clause (the same columns and directions). */
+export function receiptListOrderSql(keys: ReceiptSortKey[]): string {
+  return `ORDER BY ${keys.map((key) => `${RECEIPT_SORT_SQL[key.attribute]} ${key.direction}`).join(', ')}`;
+}

@@ -50,6 +50,3 @@ function beyondOf(key: KeysetKey): WhereOptions | null {
     [Op.or]: [condition(column, { [Op.lt]: value }), condition(column, { [Op.is]: null })],
   };
 }
-
-/** Rows per read: enough to keep round trips few, few enough to keep memory flat. */
-export const EXPORT_PAGE_SIZE = 5_000;

@@ -2,8 +2,8 @@ import { parse } from 'csv-parse/sync';
 import { mkdtemp, readFile, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { CsvTableWriter } from './csv-table-writer';
-import type { ExportRow, ExportTableSpec } from './export-table';
+import { CsvTableWriter, csvField } from './csv-table-writer';
+import { cellsOf, type ExportCells, type ExportRow, type ExportTableSpec } from './export-table';
 
 const spec: ExportTableSpec = {
   sheetName: 'Receipts',
@@ -15,8 +15,8 @@ const spec: ExportTableSpec = {
 };
 
 // eslint-disable-next-line @typescript-eslint/require-await -- a stand-in for paged reads
-async function* once(rows: ExportRow[]): AsyncIterable<ExportRow[]> {
-  yield rows;
+async function* once(rows: ExportRow[]): AsyncIterable<ExportCells[]> {
+  yield rows.map((row) => cellsOf(spec.columns, row));
 }
 
 describe('CsvTableWriter', () => {
@@ -72,5 +72,36 @@ describe('CsvTableWriter', () => {
     expect(bytes.subarray(3).toString('utf8')).toBe(
       'Notes,Panels accepted (panels)\r\nFernwick é,1\r\n',
     );
+  });
+
+  it('writes every batch in order and reports the rows written after each', async () => {
+    const file = join(dir, 'batches.csv');
+    const seen: number[] = [];
+    // eslint-disable-next-line @typescript-eslint/require-await -- a stand-in for a streamed read
+    async function* batches(): AsyncIterable<ExportCells[]> {
+      yield [
+        ['a', 1],
+        ['b', 2],
+      ];
+      yield [];
+      yield [['c', 3]];
+    }
+    const outcome = await new CsvTableWriter().write(file, spec, batches(), (rows) => {
+      seen.push(rows);
+    });
+    expect(outcome).toEqual({ rows: 3, sheets: 1 });
+    expect(seen).toEqual([2, 2, 3]);
+    expect(await readFile(file, 'utf8')).toBe(
+      'Notes,Panels accepted (panels)\r\na,1\r\nb,2\r\nc,3\r\n',
+    );
+  });
+
+  it('quotes a field with a lone CR or LF, and neutralises before quoting', () => {
+    // Source: RFC 4180 §2 rule 6 (line breaks inside a field need quotes); OWASP "CSV Injection".
+    expect(csvField('a\rb')).toBe('"a\rb"');
+    expect(csvField('a\nb')).toBe('"a\nb"');
+    expect(csvField('=1,2')).toBe('"\'=1,2"');
+    expect(csvField(-3)).toBe('-3');
+    expect(csvField(null)).toBe('');
   });
 });

@@ -21,6 +21,14 @@ export interface ExportColumn {
 
 export type ExportRow = Record<string, ExportCell>;
 
+/** One row as its cells in the order of the table's columns: what the writers take. */
+export type ExportCells = readonly ExportCell[];
+
+/** An object row's cells in the order of `columns` (a missing key is an empty cell). */
+export function cellsOf(columns: readonly ExportColumn[], row: ExportRow): ExportCell[] {
+  return columns.map((column) => row[column.key] ?? null);
+}
+
 export interface ExportTableSpec {
   /** The first sheet's name; later sheets are 'Name (2)', 'Name (3)', … */
   sheetName: string;

@@ -1,9 +1,10 @@
+import { execFileSync } from 'node:child_process';
 import { mkdtemp, rm } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 // SheetJS, not exceljs: the file is checked by a reader independent of the writer.
 import * as XLSX from 'xlsx';
-import type { ExportRow, ExportTableSpec } from './export-table';
+import { cellsOf, type ExportCells, type ExportRow, type ExportTableSpec } from './export-table';
 import { columnLetter, sheetNameOf, XlsxTableWriter } from './xlsx-table-writer';
 
 const spec: ExportTableSpec = {
@@ -17,8 +18,9 @@ const spec: ExportTableSpec = {
 };
 
 // eslint-disable-next-line @typescript-eslint/require-await -- a stand-in for paged reads
-async function* inBatches(rows: ExportRow[], size: number): AsyncIterable<ExportRow[]> {
-  for (let i = 0; i < rows.length; i += size) yield rows.slice(i, i + size);
+async function* inBatches(rows: ExportRow[], size: number): AsyncIterable<ExportCells[]> {
+  for (let i = 0; i < rows.length; i += size)
+    yield rows.slice(i, i + size).map((row) => cellsOf(spec.columns, row));
 }
 
 function rowsOf(count: number): ExportRow[] {
@@ -27,6 +29,10 @@ function rowsOf(count: number): ExportRow[] {
     chapter: `Chapter ${i + 1}`,
     panels: i + 1,
   }));
+}
+
+function readZipEntry(file: string, entry: string): Promise<string> {
+  return Promise.resolve(execFileSync('unzip', ['-p', file, entry]).toString());
 }
 
 describe('XlsxTableWriter', () => {
@@ -90,5 +96,23 @@ describe('XlsxTableWriter', () => {
     expect(sheetNameOf('A very long sheet name that goes on', 12).endsWith(' (12)')).toBe(true);
     // Source: spreadsheet column lettering, common practice: Z is 26, AA 27, XFD 16,384.
     expect([1, 26, 27, 52, 16_384].map(columnLetter)).toEqual(['A', 'Z', 'AA', 'AZ', 'XFD']);
+  });
+
+  it("gives every data cell its column's number format, and only the header is bold", async () => {
+    const file = join(dir, 'formats.xlsx');
+    await new XlsxTableWriter().write(file, spec, inBatches(rowsOf(25), 10));
+    const book = XLSX.readFile(file, { cellStyles: true, cellNF: true });
+    const sheet = book.Sheets.Receipts;
+    for (const row of [2, 14, 26]) {
+      expect((sheet[`A${row}`] as XLSX.CellObject).z).toBe('yyyy-mm-dd');
+      expect((sheet[`C${row}`] as XLSX.CellObject).z).toBe('#,##0');
+    }
+    // The shared column styles are not touched by the header's or the totals' bold font.
+    const sheetXml = await readZipEntry(file, 'xl/worksheets/sheet1.xml');
+    const styleOf = (ref: string) =>
+      new RegExp(`<c r="${ref}"[^>]* s="(\\d+)"`).exec(sheetXml)?.[1];
+    expect(styleOf('C2')).toBe(styleOf('C26'));
+    expect(styleOf('C1')).not.toBe(styleOf('C2'));
+    expect(styleOf('C27')).not.toBe(styleOf('C2'));
   });
 });

@@ -1,7 +1,10 @@
 import * as ExcelJS from 'exceljs';
+import { once } from 'node:events';
+import { setImmediate as nextTurn } from 'node:timers/promises';
 import type {
+  ExportCell,
+  ExportCells,
   ExportColumn,
-  ExportRow,
   ExportTableSpec,
   RowsWritten,
   WriteOutcome,
@@ -45,7 +48,7 @@ export class XlsxTableWriter {
   async write(
     filePath: string,
     spec: ExportTableSpec,
-    batches: AsyncIterable<readonly ExportRow[]>,
+    batches: AsyncIterable<readonly ExportCells[]>,
     onRows?: RowsWritten,
   ): Promise<WriteOutcome> {
     const hasTotals = spec.columns.some((column) => column.total === 'sum');
@@ -74,15 +77,16 @@ export class XlsxTableWriter {
     };
 
     for await (const batch of batches) {
-      for (const row of batch) {
+      for (const cells of batch) {
         if (sheet === null || sheet.dataRows === dataRowsPerSheet) {
           if (sheet) finishSheet(sheet, spec);
           sheet = open();
         }
-        addDataRow(sheet, spec.columns, row);
+        addDataRow(sheet, spec.columns, cells);
         rows += 1;
       }
       if (onRows) await onRows(rows);
+      if (sheet) await zipCaughtUp(workbook, sheet.worksheet);
     }
     // An empty table still gets its sheet with the header, so the file opens with its columns.
     finishSheet(sheet ?? open(), spec);
@@ -91,8 +95,47 @@ export class XlsxTableWriter {
   }
 }
 
+/** The parts of exceljs's streaming writer that show how far behind its zip is (not typed). */
+interface ZipInternals {
+  zip?: NodeJS.EventEmitter;
+}
+interface SheetStreamInternals {
+  stream?: { pipes?: Array<NodeJS.EventEmitter & { _writableState?: { needDrain?: boolean } }> };
+}
+
+/**
+ * exceljs writes a sheet's XML into the zip without back-pressure: each row goes into the zip's
+ * intake stream whatever it holds, and deflate takes one chunk per turn of the event loop, so a
+ * reader faster than deflate piles the uncompressed sheet up in memory (about 0.6 KB per row).
+ * Between batches this waits until the intake has drained, so memory stays flat.
+ */
+async function zipCaughtUp(
+  workbook: ExcelJS.stream.xlsx.WorkbookWriter,
+  worksheet: ExcelJS.Worksheet,
+): Promise<void> {
+  const intake = (worksheet as unknown as SheetStreamInternals).stream?.pipes?.[0];
+  const zip = (workbook as unknown as ZipInternals).zip;
+  if (!intake?._writableState?.needDrain || !zip) {
+    await nextTurn();
+    return;
+  }
+  const stop = new AbortController();
+  try {
+    await Promise.race([
+      once(intake, 'drain', { signal: stop.signal }),
+      once(zip, 'error', { signal: stop.signal }).then(([error]) => {
+        throw error as Error;
+      }),
+    ]);
+  } finally {
+    stop.abort();
+  }
+}
+
 interface SheetState {
   worksheet: ExcelJS.Worksheet;
+  /** One style object per column, shared by its data cells (see addDataRow). */
+  styles: Array<Partial<ExcelJS.Style>>;
   dataRows: number;
   /** Running sums of the columns with totals, for the cached results of the total formulas. */
   sums: number[];
@@ -111,28 +154,37 @@ function startSheet(
   const worksheet = workbook.addWorksheet(sheetNameOf(spec.sheetName, index), {
     views: [{ state: 'frozen', ySplit: 1, xSplit: 0 }],
   });
-  worksheet.columns = spec.columns.map((column) => ({
+  const styles = spec.columns.map((column): Partial<ExcelJS.Style> => {
+    const numFmt = NUMBER_FORMATS[column.kind];
+    return numFmt ? { numFmt } : {};
+  });
+  worksheet.columns = spec.columns.map((column, index) => ({
     key: column.key,
     width: column.width,
-    style: NUMBER_FORMATS[column.kind] ? { numFmt: NUMBER_FORMATS[column.kind] } : {},
+    style: styles[index],
   }));
   const header = worksheet.addRow(spec.columns.map((column) => column.header));
   header.font = { bold: true };
   header.commit();
-  return { worksheet, dataRows: 0, sums: spec.columns.map(() => 0) };
+  return { worksheet, styles, dataRows: 0, sums: spec.columns.map(() => 0) };
 }
 
-function addDataRow(sheet: SheetState, columns: readonly ExportColumn[], row: ExportRow): void {
+function addDataRow(sheet: SheetState, columns: readonly ExportColumn[], cells: ExportCells): void {
   const values = columns.map((column, index) => {
-    const value = row[column.key] ?? null;
+    const value = cells[index] ?? null;
     if (column.total === 'sum' && typeof value === 'number') sheet.sums[index] += value;
     return cellValue(column, value);
   });
-  sheet.worksheet.addRow(values).commit();
+  const added = sheet.worksheet.addRow(values);
+  // exceljs gives each cell a fresh copy of its column's style and then works out that style's
+  // id for every cell; one shared object per column lets it reuse the id it remembers per object.
+  for (let index = 0; index < columns.length; index += 1)
+    added.getCell(index + 1).style = sheet.styles[index];
+  added.commit();
   sheet.dataRows += 1;
 }
 
-function cellValue(column: ExportColumn, value: ExportRow[string]): ExcelJS.CellValue {
+function cellValue(column: ExportColumn, value: ExportCell): ExcelJS.CellValue {
   if (value === null) return null;
   // Dates as real dates (UTC midnight), so sorting and date formulas work in the sheet.
   if (column.kind === 'date' && typeof value === 'string') return new Date(`${value}T00:00:00Z`);
