@@ -7,6 +7,7 @@ import { createMonthlyTallies } from './20261202-0005-create-monthly-tallies';
 import { createReportSnapshots } from './20261202-0006-create-report-snapshots';
 import { createExports } from './20261202-0007-create-exports';
 import { createAuditSamples } from './20261202-0008-create-audit-samples';
+import { chainAuditLog } from './20261203-0009-chain-audit-log';
 import { createFindings } from './20261203-0010-create-findings';
 import { liveChapterFigures } from './20261203-0012-live-chapter-figures';
 
@@ -20,6 +21,7 @@ export const MIGRATIONS: Migration[] = [
   createReportSnapshots,
   createExports,
   createAuditSamples,
+  chainAuditLog,
   createFindings,
   liveChapterFigures,
 ];

@@ -2,6 +2,7 @@ import { Injectable } from '@nestjs/common';
 import { InjectModel } from '@nestjs/sequelize';
 import type { Transaction } from 'sequelize';
 import type { RequestContext } from '../common/context/request-context';
+import { AuditChainScheduler } from './audit-chain.scheduler';
 import { AuditEntry } from './models/audit-entry.model';
 
 export interface AuditRecord {
@@ -17,9 +18,15 @@ export interface AuditRecord {
 
 @Injectable()
 export class AuditService {
-  constructor(@InjectModel(AuditEntry) private readonly entries: typeof AuditEntry) {}
+  constructor(
+    @InjectModel(AuditEntry) private readonly entries: typeof AuditEntry,
+    private readonly chain: AuditChainScheduler,
+  ) {}
 
-  /** Writes one entry inside the caller's transaction, so the change and its record stand or fall together. */
+  /**
+   * Writes one entry inside the caller's transaction, so the change and its record stand or fall
+   * together. The entry is written unsealed; a seal is queued once the transaction commits.
+   */
   async record(
     context: RequestContext,
     record: AuditRecord,
@@ -40,6 +47,8 @@ export class AuditService {
       },
       { transaction },
     );
+    if (transaction) transaction.afterCommit(() => this.chain.sealSoon());
+    else this.chain.sealSoon();
   }
 
   /**

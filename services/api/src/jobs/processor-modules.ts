@@ -1,4 +1,5 @@
 import type { Type } from '@nestjs/common';
+import { AuditJobsModule } from '../audit/audit-jobs.module';
 import { ExportsJobsModule } from '../exports/exports-jobs.module';
 import { RemindersJobsModule } from '../reminders/reminders-jobs.module';
 import { ReportsJobsModule } from '../reports/reports-jobs.module';
@@ -12,4 +13,5 @@ export const PROCESSOR_MODULES: Type[] = [
   ReportsJobsModule,
   RemindersJobsModule,
   ExportsJobsModule,
+  AuditJobsModule,
 ];

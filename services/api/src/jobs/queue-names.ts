@@ -6,6 +6,8 @@ export enum QueueName {
   Reminders = 'reminders',
   /** Writes spreadsheet exports to files, and removes them when their links expire. */
   Exports = 'exports',
+  /** Seals new audit entries onto the hash chain, and verifies the chain every night. */
+  AuditLog = 'audit-log',
 }
 
 export const ALL_QUEUES: QueueName[] = Object.values(QueueName);

@@ -1,6 +1,9 @@
 import { Column, DataType, Model, Table } from 'sequelize-typescript';
 
-/** Append-only: the application's database account may only INSERT and SELECT here. */
+/**
+ * Append-only: the application's database account may only INSERT and SELECT here, and fill in
+ * the three seal columns (the sealer, once per entry).
+ */
 @Table({ tableName: 'audit_entries', underscored: true, timestamps: false })
 export class AuditEntry extends Model {
   declare id: number;
@@ -34,4 +37,14 @@ export class AuditEntry extends Model {
 
   @Column({ type: DataType.STRING(45), allowNull: true })
   declare ip: string | null;
+
+  /** Null until the sealer puts the entry on the hash chain. */
+  @Column({ type: DataType.BIGINT.UNSIGNED, allowNull: true })
+  declare chainSeq: number | null;
+
+  @Column({ type: DataType.CHAR(64), allowNull: true })
+  declare prevHash: string | null;
+
+  @Column({ type: DataType.CHAR(64), allowNull: true })
+  declare entryHash: string | null;
 }
