@@ -9,5 +9,4 @@ export * from './impact-agency-kinds';
 export * from './impact-gaps';
 export * from './impact-methodology';
 export * from './impact-pack-layout';
-export * from './impact-trace';
 export * from './impact-volunteer-value';

@@ -8,6 +8,7 @@ import {
   type DashboardView,
   type ImpactPackRequest,
   type SnapshotFigures,
+  type TraceView,
 } from '@tallyloom/core';
 import { mkdtempSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -16,6 +17,7 @@ import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import * as XLSX from 'xlsx';
 import type { Actor } from '../../services/api/src/common/access/actor';
+import { AppConfig } from '../../services/api/src/config/app-config';
 import { ImpactPackProducer } from '../../services/api/src/impact-pack/impact-pack.producer';
 import { SnapshotBuilder } from '../../services/api/src/reports/snapshot-builder.service';
 import { SettingsService } from '../../services/api/src/settings/settings.service';
@@ -361,6 +363,36 @@ describe('impact pack workbook on the demo network', () => {
       const totals = checkTotals(pack, 'By region');
       expect(totals.problems).toEqual([]);
       expect(totals.sums).toBeGreaterThan(8);
+    });
+
+    it("links each row's trace reference to that trace in the app, which shows the row's figure", async () => {
+      const { rows, headers } = table(pack, 'By region');
+      const sheet = pack.book.Sheets['By region'];
+      const column = headers.indexOf('Trace reference');
+      const row = rows.find((each) => Number(each['Approved tallies']) > 0)!;
+      const cell = sheet[
+        XLSX.utils.encode_cell({ r: rows.indexOf(row) + 1, c: column })
+      ] as XLSX.CellObject;
+      // The text stays the plain reference; the hyperlink is the app's trace page of it.
+      expect(cell.v).toBe(row['Trace reference']);
+      const target = new URL(String(cell.l?.Target));
+      const appUrl = new URL(testApp.app.get(AppConfig).appUrl);
+      expect(target.origin).toBe(appUrl.origin);
+      const [, page, encoded] = target.pathname.split('/');
+      expect(page).toBe('trace');
+      const reference = decodeURIComponent(encoded);
+      expect(reference).toBe(row['Trace reference']);
+
+      const auditor = await signedIn(testApp, 'auditor');
+      const response = await caller(testApp, auditor.token).get(`/api/trace/${reference}`);
+      expect(response.status).toBe(200);
+      const trace = response.body as TraceView;
+      expect(trace.agrees).toBe(true);
+      expect([reference, trace.figure.blanketsGiven, trace.figure.panelsAccepted]).toEqual([
+        reference,
+        row['Blankets given'],
+        row['Panels received'],
+      ]);
     });
 
     it('gives one row per month of the period with totals and trace references', () => {

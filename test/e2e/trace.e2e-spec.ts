@@ -1,6 +1,7 @@
 import { getConnectionToken } from '@nestjs/sequelize';
 import {
   TRACE_MEASURES,
+  traceReference,
   type ApiErrorBody,
   type DashboardView,
   type SnapshotView,
@@ -8,7 +9,6 @@ import {
   type TraceTallyLine,
   type TraceView,
 } from '@tallyloom/core';
-import { traceReference } from '@tallyloom/reports';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { SnapshotBuilder } from '../../services/api/src/reports/snapshot-builder.service';

@@ -45,6 +45,7 @@ export * from './reporting/campaign-pace';
 export * from './reporting/compliance';
 export * from './reporting/change';
 export * from './reporting/snapshot-math';
+export * from './reporting/trace-reference';
 export * from './contract/sampling';
 export * from './contract/trace';
 export * from './sampling/distributions';

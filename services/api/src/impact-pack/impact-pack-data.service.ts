@@ -5,6 +5,8 @@ import {
   monthsOf,
   periodDates,
   ROLE_LABELS,
+  tracePath,
+  traceReference,
   type DashboardView,
   type ImpactPackRequest,
   type Role,
@@ -13,7 +15,6 @@ import {
   agencyKindFiguresSql,
   agencyKindRows,
   chaptersWithoutApprovedTallySql,
-  traceReference,
   type HourValueSetting,
   type SqlQuery,
 } from '@tallyloom/reports';
@@ -21,11 +22,12 @@ import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { Actor } from '../common/access/actor';
 import { invalidField } from '../common/validation/field-errors';
+import { AppConfig } from '../config/app-config';
 import { CampaignProgressService } from '../dashboards/campaign-progress.service';
 import { oldestAsOf } from '../dashboards/snapshot-assembly';
 import { DashboardsService } from '../dashboards/dashboards.service';
 import { SettingsService } from '../settings/settings.service';
-import type { ImpactPackData } from './impact-pack-data';
+import type { ImpactFigureRow, ImpactPackData } from './impact-pack-data';
 
 type Row = Record<string, unknown>;
 
@@ -41,6 +43,7 @@ export class ImpactPackDataService {
     private readonly dashboards: DashboardsService,
     private readonly campaignProgress: CampaignProgressService,
     private readonly settings: SettingsService,
+    private readonly config: AppConfig,
   ) {}
 
   async gather(params: ImpactPackRequest, actor: Actor): Promise<ImpactPackData> {
@@ -95,19 +98,24 @@ export class ImpactPackDataService {
         label: view.scopeName,
         figures: view.figures,
         pendingTallies: view.pendingTallies,
-        traceReference: traceReference(view.scope, view.scopeId, period.key),
+        ...this.trace(traceReference(view.scope, view.scopeId, period.key)),
       })),
       byMonth: trend.map((view) => ({
         label: view.period.from,
         figures: view.figures,
         pendingTallies: view.pendingTallies,
-        traceReference: traceReference(area.scope, area.scopeId, view.period.key),
+        ...this.trace(traceReference(area.scope, area.scopeId, view.period.key)),
       })),
       byAgencyKind: agencyKindRows(kinds),
       campaigns,
       hourValues,
       chaptersWithoutApprovedTally: withoutTally.map((row) => String(row.name)),
     };
+  }
+
+  /** A row's trace key and the address that opens it (every measure: the row shows them all). */
+  private trace(reference: string): Pick<ImpactFigureRow, 'traceReference' | 'traceUrl'> {
+    return { traceReference: reference, traceUrl: `${this.config.appUrl}${tracePath(reference)}` };
   }
 
   private async campaign(actor: Actor, id: number) {

@@ -15,6 +15,8 @@ export interface ImpactFigureRow {
   figures: SnapshotFigures;
   pendingTallies: number;
   traceReference: string;
+  /** The web app's address of that trace, written as the reference cell's hyperlink. */
+  traceUrl: string;
 }
 
 /** Everything the workbook shows, gathered once; the writer does no reading of its own. */

@@ -1,5 +1,11 @@
-import { DomainError, parsePeriod, type Period, type SnapshotScope } from '@tallyloom/core';
-import { parseTraceReference, traceReference } from '@tallyloom/reports';
+import {
+  DomainError,
+  parsePeriod,
+  parseTraceReference,
+  traceReference,
+  type Period,
+  type SnapshotScope,
+} from '@tallyloom/core';
 import { invalidField } from '../common/validation/field-errors';
 
 /** The scope and stored period a trace reference names. */
@@ -16,7 +22,7 @@ const SHAPE =
   "A trace reference looks like 'network:FY2026', 'region:3:2026-Q1' or 'chapter:12:2025-07'.";
 
 /**
- * Reads a trace reference (reports/src/impact-trace.ts). Only the stored period kinds can be
+ * Reads a trace reference (core's reporting/trace-reference.ts). Only the stored period kinds can be
  * traced: a custom range has no snapshot row whose source revisions could be listed. Anything
  * else is a 400 that names `reference`.
  */

@@ -32,12 +32,14 @@ function aPack(): ImpactPackData {
         figures: figures({ blanketsGiven: 10, panelsInStock: 5 }),
         pendingTallies: 1,
         traceReference: 'region:1:FY2023',
+        traceUrl: 'https://app.example/trace/region%3A1%3AFY2023',
       },
       {
         label: 'South',
         figures: figures({ blanketsGiven: 20, panelsInStock: 7 }),
         pendingTallies: 2,
         traceReference: 'region:2:FY2023',
+        traceUrl: 'https://app.example/trace/region%3A2%3AFY2023',
       },
     ],
     byMonth: months.map((month, index) => ({
@@ -45,6 +47,7 @@ function aPack(): ImpactPackData {
       figures: figures({ blanketsGiven: 10, volunteerHours: [20, 10.25, 30.25][index] }),
       pendingTallies: 1,
       traceReference: `network:${month}`,
+      traceUrl: `https://app.example/trace/network%3A${month}`,
     })),
     byAgencyKind: [],
     campaigns: [],
@@ -105,9 +108,10 @@ describe('impact pack workbook', () => {
     expect(cell).toEqual({ formula: `SUM(${letter}2:${letter}3)`, result: 30 });
     // Stocks are not summed in a totals row.
     expect(total.getCell(stock).value).toBeNull();
-    expect(sheet.getRow(2).getCell(headers.indexOf('Trace reference')).value).toBe(
-      'region:1:FY2023',
-    );
+    // The reference stays readable text and links to the same trace in the app.
+    const trace = sheet.getRow(2).getCell(headers.indexOf('Trace reference'));
+    expect(trace.text).toBe('region:1:FY2023');
+    expect(trace.hyperlink).toBe('https://app.example/trace/region%3A1%3AFY2023');
   });
 
   it('values volunteer hours per data year as a formula, and says so for a year without a value', async () => {

@@ -158,7 +158,8 @@ export function figureRecord(
   const record: Record<string, TableCell> = { [labelKey]: label };
   for (const measure of SCALAR_MEASURES) record[measure.key] = row.figures[measure.key];
   record.pendingTallies = row.pendingTallies;
-  record.traceReference = row.traceReference;
+  // The reference stays the cell's text; the hyperlink opens the same trace in the app.
+  record.traceReference = { text: row.traceReference, hyperlink: row.traceUrl };
   return record;
 }
 

@@ -1,7 +1,13 @@
 import type { CellFormat, ImpactSheet } from '@tallyloom/reports';
 import type { Workbook, Worksheet } from 'exceljs';
 
-export type TableCell = string | number | Date | null | { formula: string; result: number };
+export type TableCell =
+  | string
+  | number
+  | Date
+  | null
+  | { formula: string; result: number }
+  | { text: string; hyperlink: string };
 
 export interface TableOptions {
   /** Row of the header (1-based); rows above it are the sheet's own title lines. */

@@ -8,7 +8,7 @@ import { NumberCell } from '@/components/ui/number-cell';
 import { RouterLink } from '@/components/ui/router-link';
 import { paths } from '@/config/paths';
 import { ExportMenu } from '@/features/exports/components/export-menu';
-import { KPI_MEASURES, MEASURE_LABELS } from './measures';
+import { KPI_MEASURES, MEASURE_LABELS, type KpiMeasure } from './measures';
 
 const column = createColumnHelper<SnapshotView>();
 
@@ -45,10 +45,18 @@ export interface BreakdownTableProps {
   nameHeader: string;
   labelledBy: string;
   hrefOf: (row: SnapshotView) => string;
+  /** A row's figure leads to its trace, for roles that may trace it. */
+  traceHrefOf?: (row: SnapshotView, measure: KpiMeasure) => string | null;
 }
 
 /** The comparison as figures, each name a link to its own dashboard. */
-export function BreakdownTable({ breakdown, nameHeader, labelledBy, hrefOf }: BreakdownTableProps) {
+export function BreakdownTable({
+  breakdown,
+  nameHeader,
+  labelledBy,
+  hrefOf,
+  traceHrefOf,
+}: BreakdownTableProps) {
   const styles = useStyles();
   const exportFilters = useSnapshotExport(breakdown);
   const columns = useMemo(
@@ -61,7 +69,16 @@ export function BreakdownTable({ breakdown, nameHeader, labelledBy, hrefOf }: Br
         column.accessor((row) => row.figures[measure], {
           id: measure,
           header: MEASURE_LABELS[measure],
-          cell: (info) => <NumberCell value={info.getValue()} />,
+          cell: (info) => {
+            const trace = traceHrefOf?.(info.row.original, measure);
+            return trace ? (
+              <RouterLink to={trace}>
+                <NumberCell value={info.getValue()} />
+              </RouterLink>
+            ) : (
+              <NumberCell value={info.getValue()} />
+            );
+          },
           meta: { numeric: true },
         }),
       ),
@@ -77,7 +94,7 @@ export function BreakdownTable({ breakdown, nameHeader, labelledBy, hrefOf }: Br
         meta: { numeric: true },
       }),
     ],
-    [nameHeader, hrefOf],
+    [nameHeader, hrefOf, traceHrefOf],
   );
   return (
     <>

@@ -76,14 +76,40 @@ describe('Dashboards', () => {
     ).toBeInTheDocument();
   });
 
-  it('links each figure to the approved tallies behind it for reviewers, not for grant writers', async () => {
+  it('links each figure to its trace for roles that may trace, the region figures too', async () => {
     mockApi({ '/api/dashboards/network': () => jsonResponse(networkDashboard()) });
     renderApp(paths.dashboard.getHref(march), { as: demoPeople.staff });
     await screen.findByRole('list', { name: 'Figures for Mar 2026' });
     expect(within(card('Panels received')).getByRole('link', { name: '1,250' })).toHaveAttribute(
       'href',
-      paths.tallyReview.getHref('?state=approved&month=2026-03'),
+      paths.trace.getHref('network:2026-03', 'panelsAccepted'),
     );
+    const table = screen.getByRole('table', { name: 'Regions compared' });
+    const riverlands = within(table).getByRole('row', { name: /^Riverlands/ });
+    const links = within(riverlands).getAllByRole('link');
+    expect(links.map((link) => link.getAttribute('href'))).toContain(
+      paths.trace.getHref('region:2:2026-03', 'blanketsGiven'),
+    );
+  });
+
+  it('links a custom range to the approved tallies instead: it has no stored figure to trace', async () => {
+    const custom = networkDashboard();
+    const range = {
+      kind: 'custom' as const,
+      key: '2026-02..2026-03',
+      from: '2026-02',
+      to: '2026-03',
+      label: 'Feb–Mar 2026',
+    };
+    custom.current = { ...custom.current, period: range };
+    mockApi({ '/api/dashboards/network': () => jsonResponse(custom) });
+    renderApp(paths.dashboard.getHref('?periodKind=custom&from=2026-02&to=2026-03'), {
+      as: demoPeople.staff,
+    });
+    const cards = await screen.findByRole('list', { name: 'Figures for Feb–Mar 2026' });
+    expect(
+      within(within(cards).getByRole('listitem', { name: 'Panels received' })).getByRole('link'),
+    ).toHaveAttribute('href', paths.tallyReview.getHref('?state=approved'));
   });
 
   it('shows grant writers the figures without links to the tallies', async () => {
@@ -173,11 +199,16 @@ describe('Dashboards', () => {
     expect(seenRequests(fetchMock, '/api/dashboards/network')).toHaveLength(0);
   });
 
-  it('sends a chapter lead to their chapter, with links to their own tally months', async () => {
+  it('sends a chapter lead to their chapter, with figures that trace their own tallies', async () => {
     const chapter = regionDashboard(11, 'Alder Falls');
     mockApi({
       '/api/dashboards/chapters/11': () =>
-        jsonResponse({ ...chapter, scope: 'chapter', breakdown: [] }),
+        jsonResponse({
+          ...chapter,
+          scope: 'chapter',
+          current: { ...chapter.current, scope: 'chapter' },
+          breakdown: [],
+        }),
     });
     const { router } = renderApp(paths.dashboard.getHref(), { as: demoPeople.chapterLead });
     await screen.findByRole('heading', { level: 1, name: 'Alder Falls: Mar 2026' });
@@ -185,7 +216,7 @@ describe('Dashboards', () => {
     expect(screen.queryByRole('region', { name: /compared/ })).toBeNull();
     expect(
       within(screen.getByRole('listitem', { name: 'Blankets given' })).getByRole('link'),
-    ).toHaveAttribute('href', paths.tallies.getHref());
+    ).toHaveAttribute('href', paths.trace.getHref('chapter:11:2026-03', 'blanketsGiven'));
   });
 
   it('says so when the period has no tallies yet', async () => {

@@ -16,11 +16,13 @@ import { BreakdownTable } from './breakdown-table';
 import { ComplianceChart } from './compliance-chart';
 import { DashboardNotes } from './dashboard-notes';
 import { KpiCards } from './kpi-cards';
+import type { KpiMeasure } from './measures';
 import { PeopleChart } from './people-chart';
 import { PeriodPicker } from './period-picker';
 import { dashboardSearch } from './period-query';
 import { StockFacts } from './stock-facts';
 import { talliesHref } from './tallies-link';
+import { traceHref } from './trace-link';
 import { TrendChart } from './trend-chart';
 
 const useStyles = makeStyles({
@@ -109,6 +111,7 @@ export function DashboardView({ target, query, onQueryChange }: DashboardViewPro
 
   const { current, previous, trend, breakdown } = dashboard.data;
   const tallies = user ? talliesHref(user.role, target, current.period) : null;
+  const traceOf = (view: SnapshotView, measure: KpiMeasure) => traceHref(user?.role, view, measure);
   const nothing = current.figures.approvedTallies === 0 && current.pendingTallies === 0;
   const childName = childScope === 'region' ? 'Region' : 'Chapter';
   const compliance = breakdown.length
@@ -131,7 +134,12 @@ export function DashboardView({ target, query, onQueryChange }: DashboardViewPro
         </EmptyState>
       ) : (
         <>
-          <KpiCards current={current} previous={previous} talliesHref={tallies} />
+          <KpiCards
+            current={current}
+            previous={previous}
+            talliesHref={tallies}
+            traceHrefOf={(measure) => traceOf(current, measure)}
+          />
           <Section id="dashboard-trend" title="Monthly trend">
             <TrendChart trend={trend} />
           </Section>
@@ -146,6 +154,7 @@ export function DashboardView({ target, query, onQueryChange }: DashboardViewPro
                 nameHeader={childName}
                 labelledBy="dashboard-breakdown"
                 hrefOf={hrefOf}
+                traceHrefOf={traceOf}
               />
             </Section>
           ) : null}

@@ -3,7 +3,7 @@ import type { SnapshotView } from '@tallyloom/core';
 import { RouterLink } from '@/components/ui/router-link';
 import { formatFigure } from '@/lib/format';
 import { changeMark, changeWords, figureChange } from './figure-change';
-import { KPI_MEASURES, MEASURE_COLOURS, MEASURE_LABELS } from './measures';
+import { KPI_MEASURES, MEASURE_COLOURS, MEASURE_LABELS, type KpiMeasure } from './measures';
 
 const useStyles = makeStyles({
   grid: {
@@ -36,10 +36,12 @@ export interface KpiCardsProps {
   previous: SnapshotView | null;
   /** The tallies behind the figures, for roles that may read them. */
   talliesHref: string | null;
+  /** A figure's trace, for roles that may trace it; the figure then links there instead. */
+  traceHrefOf?: (measure: KpiMeasure) => string | null;
 }
 
 /** The period's headline figures, each with its change on the period before. */
-export function KpiCards({ current, previous, talliesHref }: KpiCardsProps) {
+export function KpiCards({ current, previous, talliesHref, traceHrefOf }: KpiCardsProps) {
   const styles = useStyles();
   const previousLabel = previous?.period.label ?? null;
   return (
@@ -54,6 +56,7 @@ export function KpiCards({ current, previous, talliesHref }: KpiCardsProps) {
               ? styles.down
               : styles.flat;
         const figure = formatFigure(value);
+        const href = traceHrefOf?.(measure) ?? talliesHref;
         return (
           // Named by its visible label, so screen readers still read the figure inside.
           <li key={measure} aria-labelledby={`kpi-${measure}`}>
@@ -62,8 +65,8 @@ export function KpiCards({ current, previous, talliesHref }: KpiCardsProps) {
                 {MEASURE_LABELS[measure]}
               </Text>
               <Text size={700} weight="semibold" className={styles.value}>
-                {talliesHref ? (
-                  <RouterLink to={talliesHref} inline>
+                {href ? (
+                  <RouterLink to={href} inline>
                     {figure}
                   </RouterLink>
                 ) : (
