@@ -37,7 +37,8 @@ describe('audit samples on the demo network', () => {
   let receiptIds: number[];
 
   beforeAll(async () => {
-    testApp = await startTestApp({ UPLOADS_DIR: uploadsDir });
+    // Its own uploads folder, so no job processors (see receipts-scans.e2e-spec.ts).
+    testApp = await startTestApp({ UPLOADS_DIR: uploadsDir, JOB_PROCESSORS: 'off' });
     sequelize = testApp.app.get<Sequelize>(getConnectionToken());
     auditor = (await signedIn(testApp, 'auditor')).token;
     const [region] = await sequelize.query<{ id: number }>(

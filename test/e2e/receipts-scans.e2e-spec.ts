@@ -36,7 +36,9 @@ describe('scans of parcel receipts', () => {
   let receipt: ParcelReceiptDetail;
 
   beforeAll(async () => {
-    testApp = await startTestApp({ UPLOADS_DIR: uploadsDir });
+    // Its own uploads folder, so no job processors: every test app takes jobs from the shared
+    // queues, and an export written here would land where its own suite cannot find it.
+    testApp = await startTestApp({ UPLOADS_DIR: uploadsDir, JOB_PROCESSORS: 'off' });
     scans = testApp.app.get<typeof ReceiptScan>(getModelToken(ReceiptScan));
     const { region, chapters } = await aRegion()
       .named('Scan Home')
@@ -206,7 +208,11 @@ describe('scans with a small upload limit', () => {
   let receipt: ParcelReceiptDetail;
 
   beforeAll(async () => {
-    testApp = await startTestApp({ UPLOADS_DIR: uploadsDir, UPLOAD_MAX_BYTES: '1024' });
+    testApp = await startTestApp({
+      UPLOADS_DIR: uploadsDir,
+      UPLOAD_MAX_BYTES: '1024',
+      JOB_PROCESSORS: 'off',
+    });
     const { chapters } = await aRegion().withChapter('Tiny Post').build(testApp.app);
     admin = (await signedIn(testApp, 'network_admin')).token;
     receipt = await createReceipt(testApp, admin, receiptInput(chapters[0].id));
