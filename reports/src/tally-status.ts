@@ -10,15 +10,26 @@ export interface ChapterFilter {
   chapterIds?: readonly number[];
 }
 
+export interface ChapterInfoFilter extends ChapterFilter {
+  /** Only the chapters of these regions; all when absent. An empty list matches none. */
+  regionIds?: readonly number[];
+}
+
 /** Every chapter with what compliance needs: region, due day and active months. */
-export function chaptersSql(filter: ChapterFilter = {}): SqlQuery {
+export function chaptersSql(filter: ChapterInfoFilter = {}): SqlQuery {
   const replacements: Record<string, unknown> = { dayFormat: '%Y-%m-%d' };
-  let where = '';
+  const conditions: string[] = [];
   if (filter.chapterIds !== undefined) {
     const ids = requireIds('chapterIds', filter.chapterIds);
-    where = ids.length === 0 ? 'WHERE 1 = 0' : 'WHERE c.id IN (:chapterIds)';
+    conditions.push(ids.length === 0 ? '1 = 0' : 'c.id IN (:chapterIds)');
     replacements.chapterIds = ids;
   }
+  if (filter.regionIds !== undefined) {
+    const ids = requireIds('regionIds', filter.regionIds);
+    conditions.push(ids.length === 0 ? '1 = 0' : 'c.region_id IN (:regionIds)');
+    replacements.regionIds = ids;
+  }
+  const where = conditions.length > 0 ? `WHERE ${conditions.join(' AND ')}` : '';
   return {
     sql: [
       'SELECT c.id AS chapter_id, c.region_id, c.reporting_due_day,',

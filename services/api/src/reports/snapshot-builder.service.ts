@@ -20,6 +20,7 @@ import {
   type BuiltCampaignSnapshot,
   type BuiltSnapshot,
   type ChapterInfo,
+  type ChapterInfoFilter,
   type FactsFilter,
   type MonthFlows,
   type RegionPart,
@@ -72,12 +73,11 @@ export class SnapshotBuilder {
    */
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async (transaction) => {
-      const chapters = await this.chapters(transaction);
-      const chapter = chapters.find((each) => each.chapterId === chapterId);
+      const [chapter] = await this.chapters(transaction, { chapterIds: [chapterId] });
       if (!chapter) throw new Error(`chapter ${chapterId} does not exist`);
       const { fiscalYearStartMonth } = await this.settings.current();
       const targets = targetsOfChapterMonth(chapter, month, fiscalYearStartMonth, STORED_SCOPES);
-      const inRegion = chapters.filter((each) => each.regionId === chapter.regionId);
+      const inRegion = await this.chapters(transaction, { regionIds: [chapter.regionId] });
       const built = await this.build(
         inRegion,
         targets.filter((target) => target.scope !== 'network'),
@@ -88,8 +88,11 @@ export class SnapshotBuilder {
       const otherRegions = await this.storedRegions(periods, chapter.regionId, transaction);
       // A region without a row for a period (nothing filed there since the last full rebuild)
       // is built from its facts, so its chapters still count as missing or open.
+      const regionIds = (
+        await this.select({ sql: 'SELECT id FROM regions', replacements: {} }, transaction)
+      ).map((row) => Number(row.id));
       const missing = periods.flatMap((period) =>
-        [...new Set(chapters.map((each) => each.regionId))]
+        regionIds
           .filter(
             (regionId) =>
               regionId !== chapter.regionId &&
@@ -103,8 +106,8 @@ export class SnapshotBuilder {
           .map((regionId) => ({ scope: 'region' as const, scopeId: regionId, period })),
       );
       if (missing.length > 0) {
-        const missingIds = new Set(missing.map((target) => target.scopeId));
-        const theirChapters = chapters.filter((each) => missingIds.has(each.regionId));
+        const missingIds = [...new Set(missing.map((target) => target.scopeId))];
+        const theirChapters = await this.chapters(transaction, { regionIds: missingIds });
         const filled = await this.build(
           theirChapters,
           missing,
@@ -321,8 +324,11 @@ export class SnapshotBuilder {
     return built.length;
   }
 
-  private async chapters(transaction: Transaction): Promise<ChapterInfo[]> {
-    return (await this.select(chaptersSql(), transaction)).map(chapterInfoFromRow);
+  private async chapters(
+    transaction: Transaction,
+    filter: ChapterInfoFilter = {},
+  ): Promise<ChapterInfo[]> {
+    return (await selectRows(transaction, chaptersSql(filter))).map(chapterInfoFromRow);
   }
 
   private select(query: SqlQuery, transaction: Transaction): Promise<Row[]> {

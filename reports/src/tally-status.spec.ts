@@ -1,0 +1,33 @@
+import { chaptersSql, tallyStatusSql } from './tally-status';
+
+describe('chaptersSql', () => {
+  it('reads every chapter without a filter', () => {
+    expect(chaptersSql().sql).not.toContain('WHERE');
+  });
+
+  it('narrows to chapters and regions, both when both are given', () => {
+    const { sql, replacements } = chaptersSql({ chapterIds: [4], regionIds: [2, 3] });
+    expect(sql).toContain('WHERE c.id IN (:chapterIds) AND c.region_id IN (:regionIds)');
+    expect(replacements).toMatchObject({ chapterIds: [4], regionIds: [2, 3] });
+  });
+
+  it('matches nothing for an empty list instead of writing IN ()', () => {
+    const { sql } = chaptersSql({ regionIds: [] });
+    expect(sql).toContain('WHERE 1 = 0');
+    expect(sql).not.toContain('IN ()');
+  });
+
+  it('refuses ids that are not positive whole numbers', () => {
+    expect(() => chaptersSql({ regionIds: [0] })).toThrow(/regionIds/);
+  });
+});
+
+describe('tallyStatusSql', () => {
+  it('joins the approved revision only, so a tally stays one row', () => {
+    const { sql } = tallyStatusSql();
+    expect(sql).toContain(
+      'LEFT JOIN tally_revisions r ON r.tally_id = t.id AND r.revision = t.approved_revision',
+    );
+    expect(sql.match(/JOIN/g)).toHaveLength(1);
+  });
+});
