@@ -1,8 +1,6 @@
-import { Button } from '@fluentui/react-components';
 import { History20Regular } from '@fluentui/react-icons';
 import { EmptyState } from '@/components/ui/empty-state';
-import { ErrorState } from '@/components/ui/error-state';
-import { LoadingState } from '@/components/ui/loading-state';
+import { PagedListStates } from '@/components/ui/paged-list-states';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { useAuditLog } from '../api/get-audit-log';
 import {
@@ -43,65 +41,43 @@ export function AuditLogList({ query, onQueryChange }: AuditLogListProps) {
   const filters = filtersOf(query);
   const log = useAuditLog({ ...filters, page: query.page, pageSize: AUDIT_LOG_PAGE_SIZE });
 
-  let body;
-  if (log.isPending) {
-    body = <LoadingState label="Loading the audit log…" />;
-  } else if (log.isError) {
-    body = (
-      <ErrorState
-        title="The audit log could not be loaded"
-        error={log.error}
-        onRetry={() => void log.refetch()}
-        retrying={log.isFetching}
-        headingLevel={3}
-      />
-    );
-  } else if (log.data.items.length === 0) {
-    body =
-      log.data.total > 0 ? (
-        <EmptyState
-          title={`Nothing on page ${query.page}`}
-          headingLevel={3}
-          action={<Button onClick={() => onQueryChange({ ...query, page: 1 })}>First page</Button>}
-        >
-          The list is shorter than that now.
-        </EmptyState>
-      ) : isFiltered(filters) ? (
-        <EmptyState
-          title="No entries match"
-          headingLevel={3}
-          action={
-            <Button onClick={() => onQueryChange({ ...noAuditLogFilters, page: 1 })}>
-              Clear filters
-            </Button>
-          }
-        >
-          No entry fits these filters together. Widen the dates, shorten the action, or clear the
-          filters.
-        </EmptyState>
-      ) : (
+  const body = (
+    <PagedListStates
+      result={log}
+      page={query.page}
+      loadingLabel="Loading the audit log…"
+      errorTitle="The audit log could not be loaded"
+      onFirstPage={() => onQueryChange({ ...query, page: 1 })}
+      noMatch={
+        isFiltered(filters)
+          ? {
+              title: 'No entries match',
+              onClear: () => onQueryChange({ ...noAuditLogFilters, page: 1 }),
+              text: 'No entry fits these filters together. Widen the dates, shorten the action, or clear the filters.',
+            }
+          : null
+      }
+      empty={
         <EmptyState title="Nothing recorded yet" icon={<History20Regular />} headingLevel={3}>
           Every change anyone makes is recorded here as it happens.
         </EmptyState>
-      );
-  } else {
-    body = (
-      <div aria-busy={log.isPlaceholderData}>
+      }
+    >
+      {(data) => (
         <AuditLogTable
-          entries={log.data.items}
+          entries={data.items}
           labelledBy={headingId}
           pagination={{
-            pageIndex: log.data.page - 1,
+            pageIndex: data.page - 1,
             pageSize: AUDIT_LOG_PAGE_SIZE,
-            rowCount: log.data.total,
+            rowCount: data.total,
             onPageChange: (pageIndex) => onQueryChange({ ...query, page: pageIndex + 1 }),
             label: 'audit entries',
           }}
         />
-      </div>
-    );
-  }
-
+      )}
+    </PagedListStates>
+  );
   return (
     <section aria-labelledby={headingId}>
       <SectionHeading id={headingId}>Entries, newest first</SectionHeading>

@@ -1,4 +1,4 @@
-import { Button, Field, makeStyles, Select, tokens } from '@fluentui/react-components';
+import { Field, makeStyles, Select, tokens } from '@fluentui/react-components';
 import { DocumentSearch20Regular } from '@fluentui/react-icons';
 import { createColumnHelper } from '@tanstack/react-table';
 import {
@@ -11,9 +11,8 @@ import {
 import type { ReactNode } from 'react';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
-import { ErrorState } from '@/components/ui/error-state';
-import { LoadingState } from '@/components/ui/loading-state';
 import { NumberCell } from '@/components/ui/number-cell';
+import { PagedListStates } from '@/components/ui/paged-list-states';
 import { RouterLink } from '@/components/ui/router-link';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { paths } from '@/config/paths';
@@ -88,38 +87,23 @@ export function FindingsList({ query, onQueryChange, firstFindingAction }: Findi
   });
   const filtered = !!query.status || !!query.severity;
 
-  let body;
-  if (findings.isPending) {
-    body = <LoadingState label="Loading findings…" />;
-  } else if (findings.isError) {
-    body = (
-      <ErrorState
-        title="Findings could not be loaded"
-        error={findings.error}
-        onRetry={() => void findings.refetch()}
-        retrying={findings.isFetching}
-        headingLevel={3}
-      />
-    );
-  } else if (findings.data.items.length === 0) {
-    body =
-      findings.data.total > 0 ? (
-        <EmptyState
-          title={`Nothing on page ${query.page}`}
-          headingLevel={3}
-          action={<Button onClick={() => onQueryChange({ ...query, page: 1 })}>First page</Button>}
-        >
-          The list is shorter than that now.
-        </EmptyState>
-      ) : filtered ? (
-        <EmptyState
-          title="No findings match"
-          headingLevel={3}
-          action={<Button onClick={() => onQueryChange({ page: 1 })}>Clear filters</Button>}
-        >
-          No finding has this status and severity together.
-        </EmptyState>
-      ) : (
+  const body = (
+    <PagedListStates
+      result={findings}
+      page={query.page}
+      loadingLabel="Loading findings…"
+      errorTitle="Findings could not be loaded"
+      onFirstPage={() => onQueryChange({ ...query, page: 1 })}
+      noMatch={
+        filtered
+          ? {
+              title: 'No findings match',
+              onClear: () => onQueryChange({ page: 1 }),
+              text: 'No finding has this status and severity together.',
+            }
+          : null
+      }
+      empty={
         <EmptyState
           title="No findings yet"
           icon={<DocumentSearch20Regular />}
@@ -130,28 +114,26 @@ export function FindingsList({ query, onQueryChange, firstFindingAction }: Findi
             ? 'Record what you find while tracing figures and checking samples; staff can then respond.'
             : 'Findings appear here once an auditor records one.'}
         </EmptyState>
-      );
-  } else {
-    body = (
-      <div aria-busy={findings.isPlaceholderData}>
+      }
+    >
+      {(data) => (
         <DataTable
-          data={findings.data.items}
+          data={data.items}
           columns={columns}
           labelledBy={headingId}
           getRowId={(row) => String(row.id)}
           enableSorting={false}
           pagination={{
-            pageIndex: findings.data.page - 1,
+            pageIndex: data.page - 1,
             pageSize: FINDINGS_PAGE_SIZE,
-            rowCount: findings.data.total,
+            rowCount: data.total,
             onPageChange: (pageIndex) => onQueryChange({ ...query, page: pageIndex + 1 }),
             label: 'findings',
           }}
         />
-      </div>
-    );
-  }
-
+      )}
+    </PagedListStates>
+  );
   return (
     <section aria-labelledby={headingId}>
       <SectionHeading id={headingId}>Findings</SectionHeading>

@@ -1,11 +1,9 @@
-import { Button } from '@fluentui/react-components';
 import { People20Regular } from '@fluentui/react-icons';
 import type { Role, UserStatus, UserView } from '@tallyloom/core';
 import { useMemo, useState } from 'react';
 import { useNotify } from '@/components/ui/app-toaster';
 import { EmptyState } from '@/components/ui/empty-state';
-import { ErrorState } from '@/components/ui/error-state';
-import { LoadingState } from '@/components/ui/loading-state';
+import { PagedListStates } from '@/components/ui/paged-list-states';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { useResendInvite } from '../api/resend-invite';
 import { useUpdateUser } from '../api/update-user';
@@ -86,64 +84,48 @@ export function PeopleDirectory({
   const clearFilters = () =>
     onQueryChange({ page: 1, search: '', role: undefined, status: undefined });
 
-  let body;
-  if (users.isPending) {
-    body = <LoadingState label="Loading people…" />;
-  } else if (users.isError) {
-    body = (
-      <ErrorState
-        title="People could not be loaded"
-        error={users.error}
-        onRetry={() => void users.refetch()}
-        retrying={users.isFetching}
-        headingLevel={3}
-      />
-    );
-  } else if (users.data.items.length === 0) {
-    body =
-      users.data.total > 0 ? (
-        <EmptyState
-          title={`Nothing on page ${query.page}`}
-          headingLevel={3}
-          action={<Button onClick={() => onQueryChange({ ...query, page: 1 })}>First page</Button>}
-        >
-          The list is shorter than that now.
-        </EmptyState>
-      ) : isFiltered(query) ? (
-        <EmptyState
-          title="No one matches"
-          headingLevel={3}
-          action={<Button onClick={clearFilters}>Clear search and filters</Button>}
-        >
-          Nobody fits this search, role and status together. Loosen one of them, or clear them all.
-        </EmptyState>
-      ) : (
+  const body = (
+    <PagedListStates
+      result={users}
+      page={query.page}
+      loadingLabel="Loading people…"
+      errorTitle="People could not be loaded"
+      onFirstPage={() => onQueryChange({ ...query, page: 1 })}
+      noMatch={
+        isFiltered(query)
+          ? {
+              title: 'No one matches',
+              clearLabel: 'Clear search and filters',
+              onClear: clearFilters,
+              text: 'Nobody fits this search, role and status together. Loosen one of them, or clear them all.',
+            }
+          : null
+      }
+      empty={
         <EmptyState title="No one here yet" icon={<People20Regular />} headingLevel={3}>
           Invite the first people with “Invite person”: each gets an e-mail with a link to choose a
           password.
         </EmptyState>
-      );
-  } else {
-    body = (
-      <div aria-busy={users.isPlaceholderData}>
+      }
+    >
+      {(data) => (
         <PeopleTable
-          people={users.data.items}
+          people={data.items}
           labelledBy={headingId}
           currentUserId={currentUserId}
           actions={actions}
           pagination={{
             // The page on screen, which lags the URL while the next one loads.
-            pageIndex: users.data.page - 1,
+            pageIndex: data.page - 1,
             pageSize: PEOPLE_PAGE_SIZE,
-            rowCount: users.data.total,
+            rowCount: data.total,
             onPageChange: (pageIndex) => onQueryChange({ ...query, page: pageIndex + 1 }),
             label: 'people',
           }}
         />
-      </div>
-    );
-  }
-
+      )}
+    </PagedListStates>
+  );
   return (
     <section aria-labelledby={headingId}>
       <SectionHeading id={headingId}>Everyone with an account</SectionHeading>

@@ -1,9 +1,7 @@
-import { Button } from '@fluentui/react-components';
 import { BoxMultiple20Regular } from '@fluentui/react-icons';
 import type { ReactNode } from 'react';
 import { EmptyState } from '@/components/ui/empty-state';
-import { ErrorState } from '@/components/ui/error-state';
-import { LoadingState } from '@/components/ui/loading-state';
+import { PagedListStates } from '@/components/ui/paged-list-states';
 import { SectionHeading } from '@/components/ui/section-heading';
 import { useReceipts } from '../api/get-receipts';
 import {
@@ -64,43 +62,23 @@ export function ReceiptsList({
   };
   const order: ReceiptOrder = { sort: query.sort, direction: query.direction };
 
-  let body;
-  if (receipts.isPending) {
-    body = <LoadingState label="Loading parcels…" />;
-  } else if (receipts.isError) {
-    body = (
-      <ErrorState
-        title="Parcels could not be loaded"
-        error={receipts.error}
-        onRetry={() => void receipts.refetch()}
-        retrying={receipts.isFetching}
-        headingLevel={3}
-      />
-    );
-  } else if (receipts.data.items.length === 0) {
-    body =
-      receipts.data.total > 0 ? (
-        <EmptyState
-          title={`Nothing on page ${query.page}`}
-          headingLevel={3}
-          action={<Button onClick={() => onQueryChange({ ...query, page: 1 })}>First page</Button>}
-        >
-          The list is shorter than that now.
-        </EmptyState>
-      ) : isFiltered(filters) ? (
-        <EmptyState
-          title="No parcels match"
-          headingLevel={3}
-          action={
-            <Button onClick={() => onQueryChange({ ...query, ...noReceiptFilters, page: 1 })}>
-              Clear filters
-            </Button>
-          }
-        >
-          No parcel fits these dates, places, campaign and scan filters together. Widen the dates or
-          clear the filters.
-        </EmptyState>
-      ) : (
+  const body = (
+    <PagedListStates
+      result={receipts}
+      page={query.page}
+      loadingLabel="Loading parcels…"
+      errorTitle="Parcels could not be loaded"
+      onFirstPage={() => onQueryChange({ ...query, page: 1 })}
+      noMatch={
+        isFiltered(filters)
+          ? {
+              title: 'No parcels match',
+              onClear: () => onQueryChange({ ...query, ...noReceiptFilters, page: 1 }),
+              text: 'No parcel fits these dates, places, campaign and scan filters together. Widen the dates or clear the filters.',
+            }
+          : null
+      }
+      empty={
         <EmptyState
           title="No parcels logged yet"
           icon={<BoxMultiple20Regular />}
@@ -111,28 +89,26 @@ export function ReceiptsList({
             ? 'Log the first parcel as it arrives: the date, the chapter, and the panels counted and set aside.'
             : 'Parcels appear here once a chapter logs them.'}
         </EmptyState>
-      );
-  } else {
-    body = (
-      <div aria-busy={receipts.isPlaceholderData}>
+      }
+    >
+      {(data) => (
         <ReceiptsTable
-          receipts={receipts.data.items}
-          totals={receipts.data.totals}
+          receipts={data.items}
+          totals={data.totals}
           labelledBy={headingId}
           order={order}
           onOrderChange={(next) => onQueryChange({ ...query, ...next, page: 1 })}
           pagination={{
-            pageIndex: receipts.data.page - 1,
+            pageIndex: data.page - 1,
             pageSize: RECEIPTS_PAGE_SIZE,
-            rowCount: receipts.data.total,
+            rowCount: data.total,
             onPageChange: (pageIndex) => onQueryChange({ ...query, page: pageIndex + 1 }),
             label: 'parcels',
           }}
         />
-      </div>
-    );
-  }
-
+      )}
+    </PagedListStates>
+  );
   return (
     <section aria-labelledby={headingId}>
       <SectionHeading id={headingId}>Parcels received</SectionHeading>
