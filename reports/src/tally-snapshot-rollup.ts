@@ -1,7 +1,8 @@
 /**
- * Rolls chapter-month facts up into tally snapshots: each chapter over the months of a period
- * (flows sum, stock is the last approved month's), then chapters into regions and the network.
- * Pure, so the job, the live chapter figures and their tests share one roll-up.
+ * Rolls approved tallies up into tally snapshots: flows summed over a period's months (per
+ * chapter, or already per region), stock from each chapter's last approved month, compliance
+ * and pending counts from every tally's status. Pure, so the job, the live chapter figures and
+ * their tests share one roll-up.
  */
 import {
   COMPLIANCE_FIELD,
@@ -85,10 +86,20 @@ export interface RollupInput {
   today: string;
 }
 
+/** Chapter-month facts as the roll-up's flows: one row per chapter and month. */
+export function flowsOfFacts(facts: readonly ChapterMonthFact[]): MonthFlows[] {
+  return facts.map((fact) => ({
+    chapterId: fact.chapterId,
+    regionId: fact.regionId,
+    month: fact.month,
+    figures: fact.figures,
+  }));
+}
+
 /**
- * The roll-up's input from chapter-month facts (each an approved revision) and the tallies'
- * statuses: what the live chapter figures and the tests have. A fact without a status row (a
- * test's) counts as approved and never submitted.
+ * The roll-up's input from chapter-month facts alone, with statuses that do not carry the
+ * approved revision (the unit tests' worked examples): each fact becomes its month's approved
+ * revision, and a fact without a status row counts as approved and never submitted.
  */
 export function inputFromFacts(input: {
   facts: readonly ChapterMonthFact[];
@@ -123,12 +134,7 @@ export function inputFromFacts(input: {
     });
   }
   return {
-    flows: input.facts.map((fact) => ({
-      chapterId: fact.chapterId,
-      regionId: fact.regionId,
-      month: fact.month,
-      figures: fact.figures,
-    })),
+    flows: flowsOfFacts(input.facts),
     chapters: input.chapters,
     statuses,
     today: input.today,

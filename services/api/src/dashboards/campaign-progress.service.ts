@@ -10,7 +10,7 @@ import type { CampaignSnapshotFigures } from '@tallyloom/reports';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { Actor } from '../common/access/actor';
-import { isoDate, isoTimestamp, jsonColumn } from './snapshot-rows';
+import { isoDate, isoTimestamp, jsonColumn } from '../common/sql/column-values';
 import { toPublicProgress } from './public-progress';
 
 const SELECT_CAMPAIGNS = `

@@ -12,7 +12,8 @@ import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ChapterFigures } from '../reports/chapter-figures.service';
 import { SettingsService } from '../settings/settings.service';
-import { isoTimestamp, jsonColumn, type SnapshotRow } from './snapshot-rows';
+import { isoTimestamp, jsonColumn } from '../common/sql/column-values';
+import type { SnapshotRow } from './snapshot-rows';
 
 /** What to read: the month rows of some months, and whole-period rows of one kind. */
 export interface SnapshotWanted {

@@ -5,7 +5,7 @@ import {
   chapterMonthFactsSql,
   chaptersSql,
   factFromRow,
-  inputFromFacts,
+  flowsOfFacts,
   monthRangeOf,
   rollUpSnapshots,
   tallyStatusSql,
@@ -51,8 +51,9 @@ export class ChapterFigures {
         const statuses = (await select(tallyStatusSql(filter))).map(tallyStatusFromRow);
         const known = new Set(chapters.map((chapter) => chapter.chapterId));
         const today = new Date().toISOString().slice(0, 10);
+        // The statuses carry each tally's approved revision and closing stock already.
         return rollUpSnapshots(
-          inputFromFacts({ facts, chapters, statuses, today }),
+          { flows: flowsOfFacts(facts), chapters, statuses, today },
           targets.filter((target) => known.has(target.scopeId)),
         );
       },

@@ -31,11 +31,12 @@ import {
 import { QueryTypes, Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ViewCache } from '../cache/view-cache';
+import { isoDate, jsonColumn } from '../common/sql/column-values';
 import { SettingsService } from '../settings/settings.service';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
 import type { RebuildSummary } from './report-jobs';
 import { batchRows, selectRows } from './driver-rows';
-import { chapterInfoFromRow, isoDate, tallyStatusFromRow } from './snapshot-inputs';
+import { chapterInfoFromRow, tallyStatusFromRow } from './snapshot-inputs';
 
 // One rebuild at a time across every worker: two jobs touching the same region would otherwise
 // each read before the other's tally committed and the later write could carry stale figures.
@@ -46,14 +47,10 @@ const WRITE_CHUNK = 1000;
 type Progress = (percent: number) => Promise<unknown>;
 type Row = Record<string, unknown>;
 
-/** A JSON column (the driver may give text or a parsed value). */
-function jsonOf<T>(value: unknown): T {
-  return (typeof value === 'string' ? JSON.parse(value) : value) as T;
-}
-
 /**
- * Builds report and campaign snapshots from approved tallies: reads chapter-month facts in one
- * query, rolls them up with the report definition, and upserts each snapshot (recompute, never
+ * Builds the stored report snapshots (regions and the network) and campaign snapshots from
+ * approved tallies: reads the flows summed per region and month and one status row per tally,
+ * rolls them up with the report definition, and upserts each snapshot (recompute, never
  * increment) with its as-of time and the revisions it was built from.
  */
 @Injectable()
@@ -160,10 +157,10 @@ export class SnapshotBuilder {
     return rows.map((row) => ({
       scopeId: Number(row.scope_id),
       period: { kind: row.period_kind as Period['kind'], key: String(row.period_key) },
-      figures: jsonOf(row.figures),
-      compliance: jsonOf(row.compliance),
+      figures: jsonColumn(row.figures),
+      compliance: jsonColumn(row.compliance),
       pendingTallies: Number(row.pending_tallies),
-      sourceRevisions: jsonOf(row.source_revisions),
+      sourceRevisions: jsonColumn(row.source_revisions),
     }));
   }
 
@@ -312,7 +309,7 @@ export class SnapshotBuilder {
     const today = new Date().toISOString().slice(0, 10);
     const built: BuiltCampaignSnapshot[] = campaigns.map((row) =>
       buildCampaignSnapshot(
-        { id: Number(row.id), startsOn: isoDate(row.starts_on)!, endsOn: isoDate(row.ends_on)! },
+        { id: Number(row.id), startsOn: isoDate(row.starts_on), endsOn: isoDate(row.ends_on) },
         credits,
         today,
       ),

@@ -6,7 +6,7 @@ import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import type { Actor } from '../common/access/actor';
 import { within } from '../common/access/scope';
-import { isoTimestamp } from '../dashboards/snapshot-rows';
+import { isoTimestamp } from '../common/sql/column-values';
 import { MonthlyTally } from '../tallies/models/monthly-tally.model';
 import { SCOPE_CHAPTER, tallyScope } from '../tallies/tally-scope';
 

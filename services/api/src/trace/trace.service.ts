@@ -10,7 +10,7 @@ import {
   type TraceView,
 } from '@tallyloom/core';
 import type { Actor } from '../common/access/actor';
-import { jsonColumn } from '../dashboards/snapshot-rows';
+import { jsonColumn } from '../common/sql/column-values';
 import { ChapterFigures } from '../reports/chapter-figures.service';
 import { ReportSnapshot } from '../reports/models/report-snapshot.model';
 import { SettingsService } from '../settings/settings.service';
