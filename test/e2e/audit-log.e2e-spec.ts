@@ -1,6 +1,5 @@
 import { getConnectionToken, getModelToken } from '@nestjs/sequelize';
 import type {
-  ApiErrorBody,
   AuditLogEntryView,
   AuditLogPage,
   AuditVerificationView,
@@ -13,6 +12,7 @@ import { AuditService } from '../../services/api/src/audit/audit.service';
 import { AuditEntry } from '../../services/api/src/audit/models/audit-entry.model';
 import { aRegion } from './support/network-builders';
 import { aUser, signedIn, type BuiltUser } from './support/people-builders';
+import { fieldsNamed } from './support/setup-builders';
 import { startTestApp, uniqueSuffix, type TestApp } from './support/test-app';
 
 jest.setTimeout(120_000);
@@ -235,8 +235,6 @@ describe('the hash-chained audit log', () => {
   };
   const list = (query: Record<string, string | number>, token = auditor.token) =>
     testApp.http().get('/api/audit-log').query(query).set('Authorization', bearer(token));
-  const fieldsOf = (body: unknown) =>
-    ((body as ApiErrorBody).fields ?? []).map((problem) => problem.field);
 
   /** Invites someone (one 'user.invited' entry) and returns that entry's id. */
   async function anEntry(): Promise<number> {
@@ -486,7 +484,7 @@ describe('the hash-chained audit log', () => {
     ])('refuses %o with a 400 naming %s', async (query, field) => {
       const response = await list(query);
       expect(response.status).toBe(400);
-      expect(fieldsOf(response.body)).toEqual([field]);
+      expect(fieldsNamed(response.body)).toEqual([field]);
     });
 
     it('treats LIKE wildcards in a filter as plain characters', async () => {

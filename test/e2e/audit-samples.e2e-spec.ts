@@ -18,6 +18,7 @@ import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { elfExecutable, tinyPdf } from './fixtures/receipts';
 import { signedIn } from './support/people-builders';
+import { fieldsNamed } from './support/setup-builders';
 import { startTestApp, type TestApp } from './support/test-app';
 
 jest.setTimeout(120_000);
@@ -76,8 +77,6 @@ describe('audit samples on the demo network', () => {
       .http()
       .put(`/api/samples/${sampleId}/items/${itemId}`)
       .set('Authorization', `Bearer ${token}`);
-  const fieldsOf = (body: unknown) =>
-    ((body as ApiErrorBody).fields ?? []).map((problem) => problem.field);
 
   describe('an auditor plans, draws and records a sample of parcel receipts for a quarter', () => {
     let sample: AuditSampleView;
@@ -313,12 +312,12 @@ describe('audit samples on the demo network', () => {
     /** The plan is refused naming `field`, and a draw of it naming `plan.<field>`. */
     async function refused(plan: object, field: string): Promise<void> {
       const planned = await postPlan(badAuditor, plan);
-      expect({ status: planned.status, fields: fieldsOf(planned.body) }).toEqual({
+      expect({ status: planned.status, fields: fieldsNamed(planned.body) }).toEqual({
         status: 400,
         fields: [field],
       });
       const drawn = await postDraw(badAuditor, { plan, seed: FIXED_SEED });
-      expect({ status: drawn.status, fields: fieldsOf(drawn.body) }).toEqual({
+      expect({ status: drawn.status, fields: fieldsNamed(drawn.body) }).toEqual({
         status: 400,
         fields: [`plan.${field}`],
       });
@@ -401,14 +400,14 @@ describe('audit samples on the demo network', () => {
       const withoutNote = await record(badAuditor, drawn.id, item.itemId).send({
         result: 'deviation',
       });
-      expect({ status: withoutNote.status, fields: fieldsOf(withoutNote.body) }).toEqual({
+      expect({ status: withoutNote.status, fields: fieldsNamed(withoutNote.body) }).toEqual({
         status: 400,
         fields: ['note'],
       });
       const blankNote = await record(badAuditor, drawn.id, item.itemId)
         .field('result', 'deviation')
         .field('note', '   ');
-      expect({ status: blankNote.status, fields: fieldsOf(blankNote.body) }).toEqual({
+      expect({ status: blankNote.status, fields: fieldsNamed(blankNote.body) }).toEqual({
         status: 400,
         fields: ['note'],
       });
@@ -416,14 +415,14 @@ describe('audit samples on the demo network', () => {
         .field('result', 'deviation')
         .field('note', 'See the attached.')
         .attach('attachment', elfExecutable(), 'photo.pdf');
-      expect({ status: program.status, fields: fieldsOf(program.body) }).toEqual({
+      expect({ status: program.status, fields: fieldsNamed(program.body) }).toEqual({
         status: 415,
         fields: ['attachment'],
       });
       const unknownResult = await record(badAuditor, drawn.id, item.itemId).send({
         result: 'maybe',
       });
-      expect({ status: unknownResult.status, fields: fieldsOf(unknownResult.body) }).toEqual({
+      expect({ status: unknownResult.status, fields: fieldsNamed(unknownResult.body) }).toEqual({
         status: 400,
         fields: ['result'],
       });

@@ -1,6 +1,5 @@
 import { getConnectionToken } from '@nestjs/sequelize';
 import type {
-  ApiErrorBody,
   AuditSampleView,
   CreateFindingRequest,
   FindingPage,
@@ -9,6 +8,7 @@ import type {
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { signedIn } from './support/people-builders';
+import { fieldsNamed } from './support/setup-builders';
 import { startTestApp, uniqueSuffix, type TestApp } from './support/test-app';
 
 jest.setTimeout(120_000);
@@ -103,8 +103,6 @@ describe('audit findings', () => {
     patch: (path: string, body: object) =>
       testApp.http().patch(path).set('Authorization', `Bearer ${tokens[who]}`).send(body),
   });
-  const fieldsOf = (body: unknown) =>
-    ((body as ApiErrorBody).fields ?? []).map((problem) => problem.field);
   const aFinding = (overrides: Partial<CreateFindingRequest> = {}): CreateFindingRequest => ({
     title: `Receipts without scans ${uniqueSuffix()}`,
     body: 'Three receipts behind the January panels have no label scan.',
@@ -300,7 +298,7 @@ describe('audit findings', () => {
       const response = await as('auditor')
         .post('/api/findings', { ...aFinding(), title, ...body })
         .expect(400);
-      expect(fieldsOf(response.body)).toEqual([field]);
+      expect(fieldsNamed(response.body)).toEqual([field]);
       expect(await countRows('audit_findings', 'title = :title', { title })).toBe(0);
     };
 
@@ -308,7 +306,7 @@ describe('audit findings', () => {
       const response = await as('auditor')
         .post('/api/findings', { ...aFinding(), title: '   ' })
         .expect(400);
-      expect(fieldsOf(response.body)).toEqual(['title']);
+      expect(fieldsNamed(response.body)).toEqual(['title']);
     });
 
     it('an unknown severity', () => refused({ severity: 'critical' }, 'severity'));
@@ -348,7 +346,7 @@ describe('audit findings', () => {
           addLinks: [{ kind: 'tally', reference: 'twelve' }],
         })
         .expect(400);
-      expect(fieldsOf(response.body)).toEqual(['addLinks.0.reference']);
+      expect(fieldsNamed(response.body)).toEqual(['addLinks.0.reference']);
       const stored = (await as('auditor').get(`/api/findings/${finding.id}`).expect(200))
         .body as FindingView;
       expect([stored.title, stored.version]).toEqual([finding.title, 1]);
@@ -359,7 +357,7 @@ describe('audit findings', () => {
       const response = await as('staff')
         .post(`/api/findings/${finding.id}/responses`, { body: '' })
         .expect(400);
-      expect(fieldsOf(response.body)).toEqual(['body']);
+      expect(fieldsNamed(response.body)).toEqual(['body']);
       expect(
         await countRows('audit_finding_responses', 'finding_id = :id', { id: finding.id }),
       ).toBe(0);

@@ -6,7 +6,8 @@ import {
   type SamplePlanView,
   type WorksheetResultView,
 } from '@tallyloom/core';
-import { jsonOf, type AuditSample } from './models/audit-sample.model';
+import { jsonColumn } from '../common/sql/column-values';
+import type { AuditSample } from './models/audit-sample.model';
 import type { AuditSampleItem } from './models/audit-sample-item.model';
 
 /** How far a worksheet has come: items drawn, recorded, and deviations among them. */
@@ -60,7 +61,7 @@ function sampleHeader(
   sample: AuditSample,
   counts: WorksheetCounts,
 ): Omit<AuditSampleSummaryView, 'itemCount'> {
-  const plan = jsonOf<SamplePlanView>(sample.plan);
+  const plan = jsonColumn<SamplePlanView>(sample.plan);
   return {
     id: sample.id,
     plan,

@@ -1,4 +1,5 @@
 import type { ChainEntryContent, SealedChainEntry } from '@tallyloom/core';
+import { orNull } from '../common/sql/column-values';
 import type { AuditEntry } from './models/audit-entry.model';
 
 /** JSON columns may come back parsed or as text, depending on the driver: hash the value. */
@@ -11,14 +12,12 @@ function jsonValue(value: unknown): unknown {
   }
 }
 
-const idOrNull = (value: unknown) => (value === null || value === undefined ? null : Number(value));
-
 /** What the chain hashes of an entry, exactly as the database holds it now. */
 export function contentOf(entry: AuditEntry): ChainEntryContent {
   return {
     id: Number(entry.id),
     occurredAt: entry.occurredAt,
-    actorUserId: idOrNull(entry.actorUserId),
+    actorUserId: orNull(entry.actorUserId, Number),
     actorEmail: entry.actorEmail,
     action: entry.action,
     entityType: entry.entityType,
@@ -39,5 +38,3 @@ export function sealedOf(entry: AuditEntry): SealedChainEntry {
     entryHash: entry.entryHash ?? '',
   };
 }
-
-export { jsonValue };

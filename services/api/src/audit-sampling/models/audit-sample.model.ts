@@ -34,8 +34,3 @@ export class AuditSample extends Model {
   @Column({ type: DataType.DATE(3), allowNull: false })
   declare drawnAt: Date;
 }
-
-/** A JSON column's value, whether the driver parsed it or not. */
-export function jsonOf<T>(value: unknown): T {
-  return (typeof value === 'string' ? JSON.parse(value) : value) as T;
-}

@@ -1,8 +1,8 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import type { AuditLogListParams } from '@tallyloom/core';
 import { Transform } from 'class-transformer';
-import { IsOptional, IsString, MaxLength, ValidateBy } from 'class-validator';
-import { isCalendarDate, WholeNumberField } from '../../common/validation/fields';
+import { IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsoDateField, WholeNumberField } from '../../common/validation/fields';
 import { applyDecorators } from '@nestjs/common';
 
 /** An optional query filter: trimmed, blank means "no filter", with a length ceiling. */
@@ -17,16 +17,6 @@ const FilterText = (maxLength: number, description: string) =>
     IsOptional(),
     IsString({ message: '$property must be text' }),
     MaxLength(maxLength, { message: `$property must be at most ${maxLength} characters` }),
-  );
-
-const FilterDate = (description: string) =>
-  applyDecorators(
-    ApiPropertyOptional({ type: String, format: 'date', description }),
-    IsOptional(),
-    ValidateBy(
-      { name: 'isCalendarDate', validator: { validate: (value) => isCalendarDate(value) } },
-      { message: '$property must be a date written as YYYY-MM-DD' },
-    ),
   );
 
 /** The viewer's filters; also what the xlsx export takes (its paging is ignored). */
@@ -46,6 +36,8 @@ export class ListAuditLogQuery implements AuditLogListParams {
   @FilterText(64, 'The entity id, exactly')
   entityId?: string;
 
-  @FilterDate('On or after this UTC day') from?: string;
-  @FilterDate('On or before this UTC day') to?: string;
+  @IsoDateField({ presence: 'optional', description: 'On or after this UTC day' })
+  from?: string;
+  @IsoDateField({ presence: 'optional', description: 'On or before this UTC day' })
+  to?: string;
 }
