@@ -55,13 +55,13 @@ export function AuditLogFilters({ values, onChange }: AuditLogFiltersProps) {
   // The list remounts this form when the URL's filters change (back button, "Clear filters").
   const [draft, setDraft] = useState(values);
 
-  const set = (field: keyof AuditLogFilterValues) => (value: string) =>
+  const set = (field: keyof AuditLogFilterValues, value: string) =>
     setDraft((current) => ({ ...current, [field]: value }));
   const submit = (event: FormEvent) => {
     event.preventDefault();
     onChange(trimmed(draft));
   };
-  const setDate = (field: 'from' | 'to') => (value: string) => {
+  const setDate = (field: 'from' | 'to', value: string) => {
     const next = { ...draft, [field]: value };
     setDraft(next);
     onChange(trimmed(next));
@@ -74,7 +74,7 @@ export function AuditLogFilters({ values, onChange }: AuditLogFiltersProps) {
           className={styles.text}
           value={draft.who}
           maxLength={254}
-          onChange={(_, data) => set('who')(data.value)}
+          onChange={(_, data) => set('who', data.value)}
         />
       </Field>
       <Field label="What" hint="Action, or its start">
@@ -83,7 +83,7 @@ export function AuditLogFilters({ values, onChange }: AuditLogFiltersProps) {
           value={draft.what}
           maxLength={64}
           placeholder="tally."
-          onChange={(_, data) => set('what')(data.value)}
+          onChange={(_, data) => set('what', data.value)}
         />
       </Field>
       <Field label="Entity type">
@@ -92,7 +92,7 @@ export function AuditLogFilters({ values, onChange }: AuditLogFiltersProps) {
           value={draft.entityType}
           maxLength={64}
           placeholder="monthly_tally"
-          onChange={(_, data) => set('entityType')(data.value)}
+          onChange={(_, data) => set('entityType', data.value)}
         />
       </Field>
       <Field label="Entity id">
@@ -100,7 +100,7 @@ export function AuditLogFilters({ values, onChange }: AuditLogFiltersProps) {
           className={styles.short}
           value={draft.entityId}
           maxLength={64}
-          onChange={(_, data) => set('entityId')(data.value)}
+          onChange={(_, data) => set('entityId', data.value)}
         />
       </Field>
       <Field label="From">
@@ -108,7 +108,7 @@ export function AuditLogFilters({ values, onChange }: AuditLogFiltersProps) {
           className={styles.date}
           type="date"
           value={draft.from}
-          onChange={(_, data) => setDate('from')(data.value)}
+          onChange={(_, data) => setDate('from', data.value)}
         />
       </Field>
       <Field label="To">
@@ -116,7 +116,7 @@ export function AuditLogFilters({ values, onChange }: AuditLogFiltersProps) {
           className={styles.date}
           type="date"
           value={draft.to}
-          onChange={(_, data) => setDate('to')(data.value)}
+          onChange={(_, data) => setDate('to', data.value)}
         />
       </Field>
       <div className={styles.buttons}>

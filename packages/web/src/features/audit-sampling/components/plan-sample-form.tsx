@@ -27,12 +27,12 @@ import { FormAlert } from '@/components/ui/form-alert';
 import { paths } from '@/config/paths';
 import { useChapters } from '@/features/network/api/get-chapters';
 import { useRegions } from '@/features/network/api/get-regions';
-import { ApiError } from '@/lib/api-client';
 import { formatCount } from '@/lib/format';
 import { useDrawSample } from '../api/draw-sample';
 import { useSamplePlan } from '../api/plan-sample';
 import { recentQuarters } from './plan-period';
 import { POPULATION_LABELS } from './sample-words';
+import { serverProblems } from './server-problems';
 
 const useStyles = makeStyles({
   form: {
@@ -189,15 +189,6 @@ export function PlanSampleForm({ today }: { today?: string }) {
       { plan: request, ...(draft.seed.trim() ? { seed: draft.seed.trim() } : {}) },
       { onSuccess: (sample) => void navigate(paths.sample.getHref(sample.id)) },
     );
-  };
-
-  const serverProblems = (error: unknown): string[] => {
-    if (error instanceof ApiError) {
-      return error.fields?.length
-        ? error.fields.flatMap((problem) => problem.messages)
-        : [error.message];
-    }
-    return [error instanceof Error ? error.message : 'The sample could not be drawn.'];
   };
 
   const sizeBox = () => {

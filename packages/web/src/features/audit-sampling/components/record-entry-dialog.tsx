@@ -11,8 +11,8 @@ import {
 import type { SampleItemView, WorksheetResult } from '@tallyloom/core';
 import { useState } from 'react';
 import { DialogForm } from '@/components/ui/dialog-form';
-import { ApiError } from '@/lib/api-client';
 import { ATTACHMENT_ACCEPT, useRecordItem } from '../api/record-item';
+import { serverProblems } from './server-problems';
 
 export interface RecordEntryDialogProps {
   sampleId: number;
@@ -65,11 +65,7 @@ export function RecordEntryDialog({
     );
   };
 
-  const problems = record.isError
-    ? record.error instanceof ApiError && record.error.fields?.length
-      ? record.error.fields.flatMap((problem) => problem.messages)
-      : [record.error.message]
-    : [];
+  const problems = record.isError ? serverProblems(record.error) : [];
 
   return (
     <Dialog

@@ -1,7 +1,7 @@
 import { Badge, makeStyles, ProgressBar, Text, tokens } from '@fluentui/react-components';
-import { formatUpperLimit, type AuditSampleView } from '@tallyloom/core';
+import { formatTolerableRate, formatUpperLimit, type AuditSampleView } from '@tallyloom/core';
 import { FactList } from '@/components/ui/fact-list';
-import { confidenceWords, formatTolerableRate, progressWords } from './sample-words';
+import { confidenceWords, progressWords } from './sample-words';
 
 const useStyles = makeStyles({
   root: {

@@ -1,5 +1,4 @@
 import {
-  formatTolerableRate,
   monthLabel,
   type ChapterView,
   type RegionView,
@@ -17,8 +16,6 @@ export const POPULATION_LABELS: Record<SamplePopulationKind, string> = {
 export function confidenceWords(confidence: number): string {
   return `${Math.round(confidence * 100)} %`;
 }
-
-export { formatTolerableRate };
 
 /** "Mar 2026" or "Jan 2026 – Mar 2026". */
 export function monthsWords(from: string, to: string): string {

@@ -1,5 +1,5 @@
 import { makeStyles, tokens } from '@fluentui/react-components';
-import { can, type AuditSampleView } from '@tallyloom/core';
+import { can, formatTolerableRate, type AuditSampleView } from '@tallyloom/core';
 import { ErrorState } from '@/components/ui/error-state';
 import { FactList } from '@/components/ui/fact-list';
 import { LoadingState } from '@/components/ui/loading-state';
@@ -10,13 +10,7 @@ import { formatCount, formatDateTime } from '@/lib/format';
 import { useSessionUser } from '@/lib/session/use-session';
 import { useSample } from '../api/get-sample';
 import { SampleResult } from './sample-result';
-import {
-  confidenceWords,
-  formatTolerableRate,
-  monthsWords,
-  POPULATION_LABELS,
-  scopeWords,
-} from './sample-words';
+import { confidenceWords, monthsWords, POPULATION_LABELS, scopeWords } from './sample-words';
 import { WorksheetItems } from './worksheet-items';
 
 const useStyles = makeStyles({

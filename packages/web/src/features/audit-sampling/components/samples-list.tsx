@@ -1,6 +1,6 @@
 import { Badge, Text } from '@fluentui/react-components';
 import { createColumnHelper } from '@tanstack/react-table';
-import type { AuditSampleSummaryView } from '@tallyloom/core';
+import { formatTolerableRate, type AuditSampleSummaryView } from '@tallyloom/core';
 import { useMemo } from 'react';
 import { DataTable } from '@/components/ui/data-table';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -14,7 +14,6 @@ import { formatDateTime } from '@/lib/format';
 import { useSamples } from '../api/get-samples';
 import {
   confidenceWords,
-  formatTolerableRate,
   monthsWords,
   POPULATION_LABELS,
   progressWords,

@@ -1,5 +1,6 @@
 import { useMutation } from '@tanstack/react-query';
 import { apiGetBlob } from '@/lib/api-client';
+import { saveBlob } from '@/lib/save-blob';
 
 export type TemplateKind = 'csv' | 'xlsx';
 
@@ -14,18 +15,7 @@ const fileNames: Record<TemplateKind, string> = {
  */
 export async function downloadTemplate(kind: TemplateKind): Promise<void> {
   const blob = await apiGetBlob(`/receipts/imports/template.${kind}`);
-  const url = URL.createObjectURL(blob);
-  try {
-    const link = document.createElement('a');
-    link.href = url;
-    link.download = fileNames[kind];
-    document.body.append(link);
-    link.click();
-    link.remove();
-  } finally {
-    // Give the browser a moment to start the download before the URL goes.
-    setTimeout(() => URL.revokeObjectURL(url), 1_000);
-  }
+  saveBlob(blob, fileNames[kind]);
 }
 
 export function useDownloadTemplate() {

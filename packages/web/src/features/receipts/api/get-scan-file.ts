@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { useEffect, useState } from 'react';
+import { useObjectUrl } from '@/hooks/use-object-url';
 import { apiGetBlob } from '@/lib/api-client';
 import { receiptKeys } from './get-receipts';
 
@@ -28,15 +28,6 @@ export function getScanFileQueryOptions(params: ScanFileParams) {
 /** The scan as an object URL for <img> or a link, revoked when no longer shown. */
 export function useScanFileUrl(params: ScanFileParams) {
   const file = useQuery(getScanFileQueryOptions(params));
-  const [url, setUrl] = useState<string>();
-  useEffect(() => {
-    if (!file.data) return undefined;
-    const objectUrl = URL.createObjectURL(file.data);
-    setUrl(objectUrl);
-    return () => {
-      URL.revokeObjectURL(objectUrl);
-      setUrl(undefined);
-    };
-  }, [file.data]);
+  const url = useObjectUrl(file.data);
   return { url, isPending: file.isPending, isError: file.isError, error: file.error };
 }
