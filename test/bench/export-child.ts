@@ -3,20 +3,15 @@ import { parse } from 'csv-parse';
 import * as ExcelJS from 'exceljs';
 import { once } from 'node:events';
 import { createReadStream, createWriteStream } from 'node:fs';
+import type { ExportColumn } from '../../services/api/src/exports/writers/export-table';
 import { apiContext, apiExport } from './api-context';
+import { timed } from './timed';
 
 /**
  * One export measurement in a process of its own (forked by exports-bench.ts with --expose-gc),
  * so that its peak RSS is not distorted by the heap of earlier sections or measurements.
  */
 
-export type ColumnKind = 'text' | 'id' | 'count' | 'decimal' | 'date' | 'timestamp';
-export interface ExportColumnLike {
-  header: string;
-  key: string;
-  kind: ColumnKind;
-  width: number;
-}
 type Cell = string | number | Date | null;
 
 export interface BenchActor {
@@ -73,10 +68,8 @@ async function measured(work: () => Promise<number>): Promise<ChildResult> {
   const timer = setInterval(() => {
     peak = Math.max(peak, process.memoryUsage().rss);
   }, 20);
-  const start = process.hrtime.bigint();
   try {
-    const rows = await work();
-    const ms = Number(process.hrtime.bigint() - start) / 1e6;
+    const { ms, value: rows } = await timed(work);
     peak = Math.max(peak, process.memoryUsage().rss);
     return { ms, rows, peakRssGrowthMb: (peak - before) / 1024 / 1024 };
   } finally {
@@ -84,8 +77,8 @@ async function measured(work: () => Promise<number>): Promise<ChildResult> {
   }
 }
 
-async function receiptColumns(): Promise<ExportColumnLike[]> {
-  const columns = await apiExport<(showSender: boolean) => ExportColumnLike[]>(
+async function receiptColumns(): Promise<ExportColumn[]> {
+  const columns = await apiExport<(showSender: boolean) => ExportColumn[]>(
     'exports/producers/receipts-export.producer',
     'receiptColumns',
   );
@@ -118,7 +111,7 @@ async function runJob(task: Extract<ChildTask, { mode: 'job' }>): Promise<ChildR
 }
 
 /** The job's first rows back from its CSV file, typed as the job hands them to its writer. */
-async function sampleRows(path: string, columns: ExportColumnLike[]): Promise<Cell[][]> {
+async function sampleRows(path: string, columns: ExportColumn[]): Promise<Cell[][]> {
   const rows: Cell[][] = [];
   const parser = createReadStream(path).pipe(parse({ from_line: 2, to_line: SAMPLE_ROWS + 1 }));
   for await (const record of parser as AsyncIterable<string[]>) {
@@ -137,7 +130,7 @@ async function sampleRows(path: string, columns: ExportColumnLike[]): Promise<Ce
 /** exceljs's streaming writer alone: the job's rows (dates as dates) from memory. */
 async function exceljsAlone(
   filePath: string,
-  columns: ExportColumnLike[],
+  columns: ExportColumn[],
   sample: Cell[][],
   rows: number,
 ): Promise<ChildResult> {
@@ -181,7 +174,7 @@ async function exceljsAlone(
  */
 async function bareCsv(
   filePath: string,
-  columns: ExportColumnLike[],
+  columns: ExportColumn[],
   sample: Cell[][],
   rows: number,
 ): Promise<ChildResult> {

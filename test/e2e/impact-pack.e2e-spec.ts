@@ -4,6 +4,7 @@ import {
   monthsOf,
   parsePeriod,
   PEOPLE_GROUPS,
+  SNAPSHOT_MEASURES,
   type CampaignProgressView,
   type DashboardView,
   type ImpactPackRequest,
@@ -30,21 +31,6 @@ jest.setTimeout(300_000);
 // The fiscal year before the demo's current one: every demo chapter has approved months in it.
 const FISCAL_YEAR = 'FY2026';
 const PNG_SIGNATURE = Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]);
-/** Measures compared one by one; people by group are compared per group. */
-const SCALARS = [
-  'panelsAccepted',
-  'panelsSetAside',
-  'panelsUsed',
-  'blanketsAssembled',
-  'blanketsReceived',
-  'blanketsGiven',
-  'peopleServed',
-  'volunteerHours',
-  'yarnKg',
-  'panelsInStock',
-  'blanketsInStock',
-  'approvedTallies',
-] as const;
 
 type Grid = unknown[][];
 
@@ -132,7 +118,7 @@ describe('impact pack workbook on the demo network', () => {
 
   /** A figure as the workbook should show it, by measure label (from the header row). */
   function figuresRow(figures: SnapshotFigures): Record<string, number> {
-    const labels: Record<(typeof SCALARS)[number], string> = {
+    const labels: Record<(typeof SNAPSHOT_MEASURES)[number], string> = {
       panelsAccepted: 'Panels received',
       panelsSetAside: 'Panels set aside',
       panelsUsed: 'Panels used in assembly',
@@ -146,7 +132,7 @@ describe('impact pack workbook on the demo network', () => {
       blanketsInStock: 'Blankets in stock',
       approvedTallies: 'Approved tallies',
     };
-    return Object.fromEntries(SCALARS.map((key) => [labels[key], round(figures[key])]));
+    return Object.fromEntries(SNAPSHOT_MEASURES.map((key) => [labels[key], round(figures[key])]));
   }
 
   const round = (value: unknown) => Math.round(Number(value) * 100) / 100;

@@ -5,7 +5,6 @@ import {
   Injectable,
   Logger,
   NotFoundException,
-  UnprocessableEntityException,
 } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
 import {
@@ -39,7 +38,6 @@ import { ExportQueue } from './export-queue.service';
 import { exportFileName, TABLE_LABELS, TABLE_READ_POLICY, validFilters } from './export-requests';
 import { ExportRecord } from './models/export-record.model';
 import { snapshotDashboard } from './producers/snapshots-export.producer';
-import { TABLE_PRODUCERS_READY } from './producers/table-producers';
 
 export const EXPORT_ENTITY = 'export';
 
@@ -81,11 +79,6 @@ export class ExportsService {
     const { actor } = context;
     if (!can(actor.role, TABLE_READ_POLICY[body.table]))
       throw new ForbiddenException(`Your role may not read the ${body.table} table.`);
-    if (!TABLE_PRODUCERS_READY.includes(body.table))
-      throw new UnprocessableEntityException({
-        message: `Exports of the ${body.table} table are not available yet.`,
-        fields: [{ field: 'table', messages: [`${body.table} cannot be exported yet`] }],
-      });
     const filters = await validFilters(body.table, body.filters);
     const where = await this.placeNames(actor, filters);
     if (body.table === 'snapshots')
@@ -279,13 +272,7 @@ export class ExportsService {
       (filters.scope === 'region' ? filters.scopeId : undefined)) as number | undefined;
     const chapterId = (filters.chapterId ??
       (filters.scope === 'chapter' ? filters.scopeId : undefined)) as number | undefined;
-    if (regionId !== undefined) {
-      const region = await this.regions.findOne({
-        where: within(regionScope(actor), { id: regionId }),
-      });
-      if (!region) throw new NotFoundException('No such region.');
-      names.push(region.name);
-    }
+    if (regionId !== undefined) names.push(await this.regionName(actor, regionId));
     if (chapterId !== undefined) {
       const chapter = await this.chapters.findOne({
         where: within(chapterScope(actor), { id: chapterId }),
@@ -301,11 +288,7 @@ export class ExportsService {
     scope: 'region' | 'campaign',
     id: number,
   ): Promise<string> {
-    if (scope === 'region') {
-      const region = await this.regions.findOne({ where: within(regionScope(actor), { id }) });
-      if (!region) throw new NotFoundException('No such region.');
-      return region.name;
-    }
+    if (scope === 'region') return this.regionName(actor, id);
     const campaign = await this.campaigns.findByPk(id);
     // A regional campaign is in scope where its region is.
     if (
@@ -317,6 +300,13 @@ export class ExportsService {
     )
       throw new NotFoundException('No such campaign.');
     return campaign.name;
+  }
+
+  /** A region's name; one outside the person's scope is not found, like one that does not exist. */
+  private async regionName(actor: Actor, id: number): Promise<string> {
+    const region = await this.regions.findOne({ where: within(regionScope(actor), { id }) });
+    if (!region) throw new NotFoundException('No such region.');
+    return region.name;
   }
 }
 

@@ -182,8 +182,7 @@ export class ImpactPackDataService {
       this.select({ sql: 'SELECT id, region_id FROM campaigns', replacements: {} }),
     ]);
     const regionOf = new Map(regions.map((row) => [Number(row.id), row.region_id]));
-    const first = periodDates(period).fromDate;
-    const last = periodDates(period).toDate;
+    const { fromDate: first, toDate: last } = periodDates(period);
     return all
       .filter((campaign) =>
         only !== null

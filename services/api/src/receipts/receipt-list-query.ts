@@ -29,7 +29,7 @@ export interface ReceiptSortKey {
   direction: 'ASC' | 'DESC';
 }
 
-/** The list's order as keys; the last one (the id) makes it total, so keyset paging can use it. */
+/** The list's order as keys; the last one (the id) makes it total, so ties never reorder. */
 export function receiptSortKeys(query: ReceiptListParams): ReceiptSortKey[] {
   const direction = query.direction === 'asc' ? 'ASC' : 'DESC';
   if (query.sort === 'chapterName')
@@ -56,7 +56,7 @@ export function receiptListOrder(keys: ReceiptSortKey[]): Order {
  * Each sort attribute as SQL over the list's query, whose receipt is `ParcelReceipt` and its
  * chapter `chapter` (Sequelize's aliases): for reads that stream the list in its own order.
  */
-export const RECEIPT_SORT_SQL: Record<ReceiptSortAttribute, string> = {
+const RECEIPT_SORT_SQL: Record<ReceiptSortAttribute, string> = {
   receivedOn: '`ParcelReceipt`.`received_on`',
   panelsAccepted: '`ParcelReceipt`.`panels_accepted`',
   chapterName: '`chapter`.`name`',

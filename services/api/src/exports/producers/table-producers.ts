@@ -1,14 +1,11 @@
 import { Injectable } from '@nestjs/common';
-import { EXPORT_TABLES, type ExportTable } from '@tallyloom/core';
+import type { ExportTable } from '@tallyloom/core';
 import type { ExportProducer } from '../export-producer';
 import { ReceiptsExportProducer } from './receipts-export.producer';
 import { ReviewQueueExportProducer } from './review-queue-export.producer';
 import { SnapshotsExportProducer } from './snapshots-export.producer';
 import { TalliesExportProducer } from './tallies-export.producer';
 import type { TableExportParams } from './table-file';
-
-/** The tables whose producer exists; requests for the others are refused before a row is made. */
-export const TABLE_PRODUCERS_READY: readonly ExportTable[] = EXPORT_TABLES;
 
 /** Picks the producer of a table export by its table. */
 @Injectable()

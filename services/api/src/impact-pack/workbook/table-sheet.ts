@@ -1,5 +1,6 @@
 import type { CellFormat, ImpactSheet } from '@tallyloom/reports';
 import type { Workbook, Worksheet } from 'exceljs';
+import { columnLetter } from '../../exports/writers/xlsx-table-writer';
 
 export type TableCell =
   | string
@@ -39,15 +40,6 @@ export function numberFormat(format: CellFormat, currency = 'USD'): string | und
   if (format === 'text') return undefined;
   if (format === 'currency') return currencyFormat(currency);
   return NUMBER_FORMATS[format];
-}
-
-/** 'A'…'Z', 'AA'…: the letters of a 1-based column number. */
-export function columnLetter(index: number): string {
-  let letters = '';
-  for (let n = index; n > 0; n = Math.floor((n - 1) / 26)) {
-    letters = String.fromCharCode(65 + ((n - 1) % 26)) + letters;
-  }
-  return letters;
 }
 
 /** A sheet name quoted for a reference, e.g. 'By region'!$A$1. */
