@@ -10,6 +10,7 @@ import {
   expectedChapterMonths,
   inputFromFacts,
   rollUpSnapshots,
+  SnapshotRollup,
   targetsOfChapterMonth,
   targetsOfMonths,
   type ChapterInfo,
@@ -204,6 +205,65 @@ describe('rollUpSnapshots from flows summed per region (the full rebuild)', () =
     );
     expect(byRegion.length).toBeGreaterThan(6);
     expect(byRegion).toEqual(byChapter);
+
+    // In steps, as the rebuild adds them: statuses while the flows are still being summed,
+    // the flows in two parts of the chapters (a region's month in both), then the snapshots.
+    const rollup = new SnapshotRollup(targets, input.today);
+    rollup.addStatuses(chapters, withApproved);
+    const flows = [...sums.values()];
+    const regionOneMarch = flows.find((row) => row.regionId === 1 && row.month === '2026-03')!;
+    const split = {
+      ...regionOneMarch,
+      figures: { ...emptySnapshotFigures(), panelsAccepted: 1, approvedTallies: 1 },
+    };
+    const rest = {
+      ...regionOneMarch,
+      figures: {
+        ...regionOneMarch.figures,
+        panelsAccepted: regionOneMarch.figures.panelsAccepted - 1,
+        approvedTallies: regionOneMarch.figures.approvedTallies - 1,
+      },
+    };
+    rollup.addFlows([split]);
+    rollup.addFlows([...flows.filter((row) => row !== regionOneMarch), rest]);
+    expect(rollup.snapshots()).toEqual(byChapter);
+  });
+});
+
+describe('compliance read from the day of the first submission', () => {
+  it('judges two submissions on the same UTC day alike, and one a day later apart', () => {
+    // common practice: a tally is on time when first submitted by its due day (the 10th here).
+    const march = quarterPeriod('2026-Q1');
+    const targets = [{ scope: 'region' as const, scopeId: 1, period: march }];
+    const withTimes = (first: string, second: string) =>
+      rollUpSnapshots(
+        {
+          flows: [],
+          chapters: chapters.slice(0, 1),
+          statuses: [
+            {
+              chapterId: 1,
+              month: '2026-01',
+              firstSubmittedAt: first,
+              pending: false,
+              approved: null,
+            },
+            {
+              chapterId: 1,
+              month: '2026-02',
+              firstSubmittedAt: second,
+              pending: false,
+              approved: null,
+            },
+          ],
+          today: '2026-05-20',
+        },
+        targets,
+      )[0].compliance;
+    const sameDay = withTimes('2026-02-10T00:00:01.000Z', '2026-03-10T23:59:59.000Z');
+    expect([sameDay.onTime, sameDay.late]).toEqual([2, 0]);
+    const dayLate = withTimes('2026-02-10T23:59:59.000Z', '2026-03-11T00:00:00.000Z');
+    expect([dayLate.onTime, dayLate.late]).toEqual([1, 1]);
   });
 });
 

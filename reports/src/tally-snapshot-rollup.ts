@@ -141,9 +141,8 @@ export function inputFromFacts(input: {
   };
 }
 
-/** What one scope's chapters add up to in one month: flows, compliance, pending, sources. */
-interface MonthBucket {
-  figures: SnapshotFigures;
+/** What one scope's chapters' tallies add up to in one month: compliance, pending, sources. */
+interface StatusBucket {
   compliance: ComplianceFigures;
   pendingTallies: number;
   sources: Array<[number, number]>;
@@ -177,164 +176,210 @@ export function rollUpSnapshots(
   input: RollupInput,
   targets: readonly SnapshotTarget[],
 ): BuiltSnapshot[] {
-  const currentMonth = input.today.slice(0, 7);
-  const unique = new Map<string, SnapshotTarget>();
-  for (const target of targets) unique.set(targetKey(target), target);
-  const built = new Map<string, BuiltSnapshot>();
-  // Targets by period and scope; the periods each month falls in; the scopes anyone asked for.
-  const byPeriod = new Map<string, Map<string, BuiltSnapshot>>();
-  // The same maps by the Period object itself, for the per-chapter loops (no key to build).
-  const scopesOfPeriod = new Map<Period, Map<string, BuiltSnapshot>>();
-  const periodsOfMonth = new Map<MonthKey, Period[]>();
-  const wantedScopes = new Set<string>();
-  for (const [key, target] of unique) {
-    const snapshot: BuiltSnapshot = {
-      ...target,
-      figures: emptySnapshotFigures(),
-      compliance: emptyCompliance(),
-      pendingTallies: 0,
-      sourceRevisions: [],
-    };
-    built.set(key, snapshot);
-    wantedScopes.add(scopeKey(target.scope, target.scopeId));
-    let scopes = byPeriod.get(periodId(target.period));
-    if (!scopes) {
-      scopes = new Map();
-      byPeriod.set(periodId(target.period), scopes);
-      scopesOfPeriod.set(target.period, scopes);
-      for (const month of monthsOf(target.period)) {
-        const periods = periodsOfMonth.get(month);
-        if (periods) periods.push(target.period);
-        else periodsOfMonth.set(month, [target.period]);
-      }
-    }
-    scopes.set(scopeKey(target.scope, target.scopeId), snapshot);
-  }
+  const rollup = new SnapshotRollup(targets, input.today);
+  rollup.addFlows(input.flows);
+  rollup.addStatuses(input.chapters, input.statuses);
+  return rollup.snapshots();
+}
 
-  const buckets = new Map<string, Map<MonthKey, MonthBucket>>();
-  const bucketsOf = (scope: string): Map<MonthKey, MonthBucket> => {
-    let months = buckets.get(scope);
-    if (!months) {
-      months = new Map();
-      buckets.set(scope, months);
-    }
-    return months;
-  };
-  const bucketIn = (months: Map<MonthKey, MonthBucket>, month: MonthKey): MonthBucket => {
-    let bucket = months.get(month);
-    if (!bucket) {
-      bucket = {
+/**
+ * `rollUpSnapshots` in steps, in any order: a full rebuild adds the statuses while the database
+ * is still summing the flows, and then only the flows are left to add when they come.
+ */
+export class SnapshotRollup {
+  private readonly currentMonth: MonthKey;
+  private readonly built = new Map<string, BuiltSnapshot>();
+  /** Targets by the Period object itself, for the per-chapter loops (no key to build). */
+  private readonly scopesOfPeriod = new Map<Period, Map<string, BuiltSnapshot>>();
+  /** The periods each month falls in. */
+  private readonly periodsOfMonth = new Map<MonthKey, Period[]>();
+  /** The scopes anyone asked for. */
+  private readonly wantedScopes = new Set<string>();
+  /** Flows by scope and month, added to the targets in `snapshots()`. */
+  private readonly flowBuckets = new Map<string, Map<MonthKey, SnapshotFigures>>();
+  /** A reporting status depends only on these, and a full rebuild asks per chapter-month. */
+  private readonly statusMemo = new Map<string, ReturnType<typeof reportingStatus>>();
+
+  constructor(
+    targets: readonly SnapshotTarget[],
+    /** ISO date: compliance is judged on this day, and later months are not expected yet. */
+    private readonly today: string,
+  ) {
+    this.currentMonth = today.slice(0, 7);
+    const byPeriod = new Map<string, Map<string, BuiltSnapshot>>();
+    for (const target of targets) {
+      const key = targetKey(target);
+      if (this.built.has(key)) continue;
+      const snapshot: BuiltSnapshot = {
+        ...target,
         figures: emptySnapshotFigures(),
         compliance: emptyCompliance(),
         pendingTallies: 0,
-        sources: [],
+        sourceRevisions: [],
       };
-      months.set(month, bucket);
-    }
-    return bucket;
-  };
-  // A reporting status depends only on these, and a full rebuild asks for it per chapter-month.
-  const statusMemo = new Map<string, ReturnType<typeof reportingStatus>>();
-  const statusOf = (month: MonthKey, dueDay: number, submittedAt: string | null) => {
-    const key = `${month}|${dueDay}|${submittedAt ?? ''}`;
-    let status = statusMemo.get(key);
-    if (status === undefined) {
-      status = reportingStatus({
-        month,
-        dueDay,
-        firstSubmittedAt: submittedAt,
-        today: input.today,
-      });
-      statusMemo.set(key, status);
-    }
-    return status;
-  };
-
-  const months = [...periodsOfMonth.keys()];
-  // Flows: each row into the month buckets of the scopes it covers (a region's sum has no
-  // chapter; a chapter's month counts for its chapter, region and the network).
-  for (const flows of input.flows) {
-    if (!periodsOfMonth.has(flows.month)) continue;
-    const covered = [scopeKey('region', flows.regionId), scopeKey('network', 0)];
-    if (flows.chapterId !== null) covered.push(scopeKey('chapter', flows.chapterId));
-    for (const scope of covered) {
-      if (!wantedScopes.has(scope)) continue;
-      addFlowsInPlace(bucketIn(bucketsOf(scope), flows.month).figures, flows.figures);
+      this.built.set(key, snapshot);
+      this.wantedScopes.add(scopeKey(target.scope, target.scopeId));
+      let scopes = byPeriod.get(periodId(target.period));
+      if (!scopes) {
+        scopes = new Map();
+        byPeriod.set(periodId(target.period), scopes);
+        this.scopesOfPeriod.set(target.period, scopes);
+        for (const month of monthsOf(target.period)) {
+          const periods = this.periodsOfMonth.get(month);
+          if (periods) periods.push(target.period);
+          else this.periodsOfMonth.set(month, [target.period]);
+        }
+      }
+      scopes.set(scopeKey(target.scope, target.scopeId), snapshot);
     }
   }
 
-  const statusesOf = groupBy(input.statuses, (status) => status.chapterId);
-  for (const chapter of input.chapters) {
-    const scopes = [
-      scopeKey('chapter', chapter.chapterId),
-      scopeKey('region', chapter.regionId),
-      scopeKey('network', 0),
-    ].filter((scope) => wantedScopes.has(scope));
-    if (scopes.length === 0) continue;
-    const monthBuckets = scopes.map(bucketsOf);
+  /**
+   * Flows into the month buckets of the scopes each row covers (a region's sum has no chapter;
+   * a chapter's month counts for its chapter, region and the network).
+   */
+  addFlows(flows: readonly MonthFlows[]): void {
+    for (const row of flows) {
+      if (!this.periodsOfMonth.has(row.month)) continue;
+      const covered = [scopeKey('region', row.regionId), scopeKey('network', 0)];
+      if (row.chapterId !== null) covered.push(scopeKey('chapter', row.chapterId));
+      for (const scope of covered) {
+        if (!this.wantedScopes.has(scope)) continue;
+        let months = this.flowBuckets.get(scope);
+        if (!months) {
+          months = new Map();
+          this.flowBuckets.set(scope, months);
+        }
+        let figures = months.get(row.month);
+        if (!figures) {
+          figures = emptySnapshotFigures();
+          months.set(row.month, figures);
+        }
+        addFlowsInPlace(figures, row.figures);
+      }
+    }
+  }
 
-    const submittedAt = new Map<MonthKey, string | null>();
-    const lastApprovedIn = new Map<Period, { month: MonthKey; approved: ApprovedRevision }>();
-    for (const status of statusesOf.get(chapter.chapterId) ?? []) {
-      submittedAt.set(status.month, status.firstSubmittedAt);
-      const periods = periodsOfMonth.get(status.month);
-      if (!periods) continue;
-      if (status.pending) {
-        for (const inScope of monthBuckets) bucketIn(inScope, status.month).pendingTallies += 1;
+  /**
+   * Compliance, pending, sources and stock of the chapters given, from their tallies' states,
+   * added to the targets at once: month buckets per scope first, then each target's months.
+   */
+  addStatuses(chapters: readonly ChapterInfo[], statuses: readonly TallyStatus[]): void {
+    const buckets = new Map<string, Map<MonthKey, StatusBucket>>();
+    const bucketsOf = (scope: string) => {
+      let months = buckets.get(scope);
+      if (!months) {
+        months = new Map();
+        buckets.set(scope, months);
       }
-      const { approved } = status;
-      if (!approved) continue;
-      for (const inScope of monthBuckets) {
-        bucketIn(inScope, status.month).sources.push([approved.tallyId, approved.revision]);
+      return months;
+    };
+    const bucketIn = (months: Map<MonthKey, StatusBucket>, month: MonthKey) => {
+      let bucket = months.get(month);
+      if (!bucket) {
+        bucket = { compliance: emptyCompliance(), pendingTallies: 0, sources: [] };
+        months.set(month, bucket);
       }
-      for (const period of periods) {
-        const last = lastApprovedIn.get(period);
-        if (!last || last.month < status.month) {
-          lastApprovedIn.set(period, { month: status.month, approved });
+      return bucket;
+    };
+    const months = [...this.periodsOfMonth.keys()];
+    const statusesOf = groupBy(statuses, (status) => status.chapterId);
+    for (const chapter of chapters) {
+      const scopes = [
+        scopeKey('chapter', chapter.chapterId),
+        scopeKey('region', chapter.regionId),
+        scopeKey('network', 0),
+      ].filter((scope) => this.wantedScopes.has(scope));
+      if (scopes.length === 0) continue;
+      const monthBuckets = scopes.map(bucketsOf);
+
+      const submittedAt = new Map<MonthKey, string | null>();
+      const lastApprovedIn = new Map<Period, { month: MonthKey; approved: ApprovedRevision }>();
+      for (const status of statusesOf.get(chapter.chapterId) ?? []) {
+        submittedAt.set(status.month, status.firstSubmittedAt);
+        const periods = this.periodsOfMonth.get(status.month);
+        if (!periods) continue;
+        if (status.pending) {
+          for (const inScope of monthBuckets) bucketIn(inScope, status.month).pendingTallies += 1;
+        }
+        const { approved } = status;
+        if (!approved) continue;
+        for (const inScope of monthBuckets) {
+          bucketIn(inScope, status.month).sources.push([approved.tallyId, approved.revision]);
+        }
+        for (const period of periods) {
+          const last = lastApprovedIn.get(period);
+          if (!last || last.month < status.month) {
+            lastApprovedIn.set(period, { month: status.month, approved });
+          }
+        }
+      }
+      // Stock is a level: the chapter's closing stock of its last approved month in each period.
+      for (const [period, { approved }] of lastApprovedIn) {
+        const inPeriod = this.scopesOfPeriod.get(period)!;
+        for (const scope of scopes) {
+          const snapshot = inPeriod.get(scope);
+          if (!snapshot) continue;
+          snapshot.figures.panelsInStock += approved.panelsClosing;
+          snapshot.figures.blanketsInStock += approved.blanketsClosing;
+        }
+      }
+
+      const activeFrom = chapter.activeFrom.slice(0, 7);
+      const activeTo = chapter.activeTo?.slice(0, 7) ?? this.currentMonth;
+      const lastExpected = activeTo < this.currentMonth ? activeTo : this.currentMonth;
+      for (const month of months) {
+        if (month < activeFrom || month > lastExpected) continue;
+        const field =
+          COMPLIANCE_FIELD[this.statusOf(month, chapter.dueDay, submittedAt.get(month) ?? null)];
+        for (const inScope of monthBuckets) {
+          const { compliance } = bucketIn(inScope, month);
+          compliance.expected += 1;
+          compliance[field] += 1;
         }
       }
     }
-    // Stock is a level: the chapter's closing stock of its last approved month in each period.
-    for (const [period, { approved }] of lastApprovedIn) {
-      const inPeriod = scopesOfPeriod.get(period)!;
-      for (const scope of scopes) {
-        const snapshot = inPeriod.get(scope);
-        if (!snapshot) continue;
-        snapshot.figures.panelsInStock += approved.panelsClosing;
-        snapshot.figures.blanketsInStock += approved.blanketsClosing;
-      }
-    }
 
-    const activeFrom = chapter.activeFrom.slice(0, 7);
-    const activeTo = chapter.activeTo?.slice(0, 7) ?? currentMonth;
-    const lastExpected = activeTo < currentMonth ? activeTo : currentMonth;
-    for (const month of months) {
-      if (month < activeFrom || month > lastExpected) continue;
-      const field =
-        COMPLIANCE_FIELD[statusOf(month, chapter.dueDay, submittedAt.get(month) ?? null)];
-      for (const inScope of monthBuckets) {
-        const { compliance } = bucketIn(inScope, month);
-        compliance.expected += 1;
-        compliance[field] += 1;
+    for (const snapshot of this.built.values()) {
+      const inScope = buckets.get(scopeKey(snapshot.scope, snapshot.scopeId));
+      if (!inScope) continue;
+      for (const month of monthsOf(snapshot.period)) {
+        const bucket = inScope.get(month);
+        if (!bucket) continue;
+        snapshot.compliance = addCompliance(snapshot.compliance, bucket.compliance);
+        snapshot.pendingTallies += bucket.pendingTallies;
+        for (const source of bucket.sources) snapshot.sourceRevisions.push(source);
       }
+      // A snapshot counts one revision per tally, so the tally id alone orders them.
+      snapshot.sourceRevisions.sort((a, b) => a[0] - b[0]);
     }
   }
 
-  for (const snapshot of built.values()) {
-    const inScope = buckets.get(scopeKey(snapshot.scope, snapshot.scopeId));
-    if (!inScope) continue;
-    for (const month of monthsOf(snapshot.period)) {
-      const bucket = inScope.get(month);
-      if (!bucket) continue;
-      addFlowsInPlace(snapshot.figures, bucket.figures);
-      snapshot.compliance = addCompliance(snapshot.compliance, bucket.compliance);
-      snapshot.pendingTallies += bucket.pendingTallies;
-      for (const source of bucket.sources) snapshot.sourceRevisions.push(source);
+  /** Every target's snapshot, with the flows of its period's months added up. */
+  snapshots(): BuiltSnapshot[] {
+    for (const snapshot of this.built.values()) {
+      const inScope = this.flowBuckets.get(scopeKey(snapshot.scope, snapshot.scopeId));
+      if (!inScope) continue;
+      for (const month of monthsOf(snapshot.period)) {
+        const figures = inScope.get(month);
+        if (figures) addFlowsInPlace(snapshot.figures, figures);
+      }
     }
-    // A snapshot counts one revision per tally, so the tally id alone orders them.
-    snapshot.sourceRevisions.sort((a, b) => a[0] - b[0]);
+    this.flowBuckets.clear();
+    return [...this.built.values()];
   }
-  return [...built.values()];
+
+  private statusOf(month: MonthKey, dueDay: number, submittedAt: string | null) {
+    // The status reads only the UTC day of the submission, so a UTC timestamp's date is its key.
+    const submittedOn = submittedAt?.endsWith('Z') ? submittedAt.slice(0, 10) : submittedAt;
+    const key = `${month}|${dueDay}|${submittedOn ?? ''}`;
+    let status = this.statusMemo.get(key);
+    if (status === undefined) {
+      status = reportingStatus({ month, dueDay, firstSubmittedAt: submittedAt, today: this.today });
+      this.statusMemo.set(key, status);
+    }
+    return status;
+  }
 }
 
 /** A stored or freshly built region snapshot, as far as the network needs it. */
@@ -407,33 +452,36 @@ export function targetsOfMonths(
   scopes: readonly SnapshotScope[] = ALL_SCOPES,
 ): SnapshotTarget[] {
   const regionOf = new Map(chapters.map((chapter) => [chapter.chapterId, chapter.regionId]));
-  const targets = new Map<string, SnapshotTarget>();
-  const add = (scope: SnapshotScope, scopeId: number, period: Period) => {
-    const target = { scope, scopeId, period };
-    targets.set(targetKey(target), target);
-  };
-  // Each scope × month once: a full rebuild passes every chapter-month of the network.
-  const seen = new Map<string, Set<MonthKey>>();
-  const periodsOf = new Map<MonthKey, Period[]>();
+  // The months of each scope once (a full rebuild passes every chapter-month of the network),
+  // keyed by number: no key text is built per chapter-month.
+  const monthsOfScope = new Map<SnapshotScope, Map<number, Set<MonthKey>>>(
+    scopes.map((scope) => [scope, new Map()]),
+  );
   for (const { chapterId, month } of tallied) {
     const regionId = regionOf.get(chapterId);
     if (regionId === undefined) continue;
-    for (const scope of scopes) {
+    for (const [scope, byId] of monthsOfScope) {
       const scopeId = holding(scope, { chapterId, regionId });
-      const key = scope === 'network' ? scope : scope === 'region' ? `r${scopeId}` : `c${scopeId}`;
-      let months = seen.get(key);
-      if (!months) {
-        months = new Set();
-        seen.set(key, months);
+      const months = byId.get(scopeId);
+      if (months) months.add(month);
+      else byId.set(scopeId, new Set([month]));
+    }
+  }
+  const periodsOf = new Map<MonthKey, Period[]>();
+  const targets = new Map<string, SnapshotTarget>();
+  for (const [scope, byId] of monthsOfScope) {
+    for (const [scopeId, months] of byId) {
+      for (const month of months) {
+        let periods = periodsOf.get(month);
+        if (!periods) {
+          periods = periodsContaining(month, fiscalYearStartMonth);
+          periodsOf.set(month, periods);
+        }
+        for (const period of periods) {
+          const target = { scope, scopeId, period };
+          targets.set(targetKey(target), target);
+        }
       }
-      if (months.has(month)) continue;
-      months.add(month);
-      let periods = periodsOf.get(month);
-      if (!periods) {
-        periods = periodsContaining(month, fiscalYearStartMonth);
-        periodsOf.set(month, periods);
-      }
-      for (const period of periods) add(scope, scopeId, period);
     }
   }
   return [...targets.values()];

@@ -13,6 +13,7 @@ import {
   regionMonthFlowsFromRow,
   regionMonthFlowsSql,
   rollUpSnapshots,
+  SnapshotRollup,
   STORED_SCOPES,
   tallyStatusSql,
   targetsOfChapterMonth,
@@ -42,7 +43,15 @@ import { chapterInfoFromRow, tallyStatusFromRow } from './snapshot-inputs';
 // each read before the other's tally committed and the later write could carry stale figures.
 const LOCK_NAME = 'tallyloom:report-snapshots';
 const LOCK_WAIT_SECONDS = 120;
-const WRITE_CHUNK = 1000;
+const WRITE_CHUNK = 250;
+const FLOW_READ_PARTS = 2;
+const UPSERT_SNAPSHOT_SQL = `INSERT INTO report_snapshots (scope, scope_id, period_kind, period_key,
+    period_from, period_to, figures, compliance, pending_tallies, source_revisions, as_of)
+  VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+  ON DUPLICATE KEY UPDATE period_from = VALUES(period_from), period_to = VALUES(period_to),
+    figures = VALUES(figures), compliance = VALUES(compliance),
+    pending_tallies = VALUES(pending_tallies), source_revisions = VALUES(source_revisions),
+    as_of = VALUES(as_of)`;
 
 type Progress = (percent: number) => Promise<unknown>;
 type Row = Record<string, unknown>;
@@ -170,32 +179,34 @@ export class SnapshotBuilder {
       const chapters = await this.chapters(transaction);
       const { fiscalYearStartMonth } = await this.settings.current();
       // The flows' GROUP BY is the longest read: it runs on a connection of its own while the
-      // statuses are read and the targets worked out. Each statement of a READ COMMITTED
-      // transaction sees what was committed when it began, so this is no less consistent, and a
-      // tally approved meanwhile queues its own rebuild, which waits for this one's lock.
-      const flowsRead = this.regionFlows({});
-      const prepared = (async () => {
-        // Every tally in any state: compliance, pending, stock, sources, and which months exist.
-        const statuses = await this.statuses({}, transaction);
-        // From the network's first tally to this month, months nobody filed count too.
-        const firstMonth = statuses.reduce<string | null>(
-          (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
-          null,
-        );
-        const thisMonth = new Date().toISOString().slice(0, 7);
-        const expected = firstMonth ? expectedChapterMonths(chapters, firstMonth, thisMonth) : [];
-        const targets = targetsOfMonths(
-          chapters,
-          [...statuses, ...expected],
-          fiscalYearStartMonth,
-          STORED_SCOPES,
-        );
-        return { statuses, targets };
-      })();
-      const [flows, { statuses, targets }] = await Promise.all([flowsRead, prepared]);
-      await progress(10);
+      // statuses are read and rolled up. Each statement of a READ COMMITTED transaction sees
+      // what was committed when it began, so this is no less consistent, and a tally approved
+      // meanwhile queues its own rebuild, which waits for this one's lock.
+      const flowsRead = this.regionFlowsInParts(chapters);
+      // Awaited below; this only keeps a failure meanwhile from going unhandled.
+      flowsRead.catch(() => undefined);
+      // Every tally in any state: compliance, pending, stock, sources, and which months exist.
+      const statuses = await this.statuses({}, transaction);
+      // From the network's first tally to this month, months nobody filed count too.
+      const firstMonth = statuses.reduce<string | null>(
+        (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
+        null,
+      );
       const today = new Date().toISOString().slice(0, 10);
-      const built = rollUpSnapshots({ flows, chapters, statuses, today }, targets);
+      const expected = firstMonth
+        ? expectedChapterMonths(chapters, firstMonth, today.slice(0, 7))
+        : [];
+      const targets = targetsOfMonths(
+        chapters,
+        [...statuses, ...expected],
+        fiscalYearStartMonth,
+        STORED_SCOPES,
+      );
+      const rollup = new SnapshotRollup(targets, today);
+      rollup.addStatuses(chapters, statuses);
+      await progress(10);
+      rollup.addFlows(await flowsRead);
+      const built = rollup.snapshots();
       await progress(40);
       const asOf = new Date();
       await this.writeSnapshots(built, asOf, transaction, async (done) =>
@@ -239,6 +250,20 @@ export class SnapshotBuilder {
     return rows.map(regionMonthFlowsFromRow);
   }
 
+  /**
+   * Every region's flows, summed by the database in parts of the chapters on connections of
+   * their own, side by side: one GROUP BY runs on one core, and a region's rows from two parts
+   * simply add up in the roll-up.
+   */
+  private async regionFlowsInParts(chapters: readonly ChapterInfo[]): Promise<MonthFlows[]> {
+    const ids = chapters.map((chapter) => chapter.chapterId);
+    const size = Math.ceil(ids.length / FLOW_READ_PARTS);
+    const parts = Array.from({ length: FLOW_READ_PARTS }, (_, index) =>
+      ids.slice(index * size, (index + 1) * size),
+    ).filter((part) => part.length > 0);
+    return (await Promise.all(parts.map((chapterIds) => this.regionFlows({ chapterIds })))).flat();
+  }
+
   private async statuses(filter: FactsFilter, transaction: Transaction): Promise<TallyStatus[]> {
     return (await selectRows(transaction, tallyStatusSql(filter))).map(tallyStatusFromRow);
   }
@@ -256,36 +281,35 @@ export class SnapshotBuilder {
   ): Promise<void> {
     // As UTC text: the driver's bulk protocol would send a Date in the process's time zone.
     const asOfText = asOf.toISOString().slice(0, 23).replace('T', ' ');
+    const valuesOf = (snapshot: BuiltSnapshot) => {
+      const { fromDate, toDate } = periodDates(snapshot.period);
+      return [
+        snapshot.scope,
+        snapshot.scopeId,
+        snapshot.period.kind,
+        snapshot.period.key,
+        fromDate,
+        toDate,
+        JSON.stringify(snapshot.figures),
+        JSON.stringify(snapshot.compliance),
+        snapshot.pendingTallies,
+        JSON.stringify(snapshot.sourceRevisions),
+        asOfText,
+      ];
+    };
+    // The next chunk's JSON is written while the server stores the one before (one statement
+    // at a time on the connection, but the two processes work side by side).
+    let writing: Promise<void> | null = null;
     for (let start = 0; start < built.length; start += WRITE_CHUNK) {
-      const chunk = built.slice(start, start + WRITE_CHUNK);
-      await batchRows(
-        transaction,
-        `INSERT INTO report_snapshots (scope, scope_id, period_kind, period_key, period_from,
-           period_to, figures, compliance, pending_tallies, source_revisions, as_of)
-         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
-         ON DUPLICATE KEY UPDATE period_from = VALUES(period_from), period_to = VALUES(period_to),
-           figures = VALUES(figures), compliance = VALUES(compliance),
-           pending_tallies = VALUES(pending_tallies), source_revisions = VALUES(source_revisions),
-           as_of = VALUES(as_of)`,
-        chunk.map((snapshot) => {
-          const { fromDate, toDate } = periodDates(snapshot.period);
-          return [
-            snapshot.scope,
-            snapshot.scopeId,
-            snapshot.period.kind,
-            snapshot.period.key,
-            fromDate,
-            toDate,
-            JSON.stringify(snapshot.figures),
-            JSON.stringify(snapshot.compliance),
-            snapshot.pendingTallies,
-            JSON.stringify(snapshot.sourceRevisions),
-            asOfText,
-          ];
-        }),
-      );
-      await progress(start + chunk.length);
+      const rows = built.slice(start, start + WRITE_CHUNK).map(valuesOf);
+      if (writing) {
+        await writing;
+        await progress(start);
+      }
+      writing = batchRows(transaction, UPSERT_SNAPSHOT_SQL, rows);
     }
+    if (writing) await writing;
+    await progress(built.length);
   }
 
   private async rebuildCampaigns(
