@@ -19,6 +19,15 @@ describe('chaptersSql', () => {
 
   it('refuses ids that are not positive whole numbers', () => {
     expect(() => chaptersSql({ regionIds: [0] })).toThrow(/regionIds/);
+    expect(() => chaptersSql({ regionOfChapterId: 1.5 })).toThrow(/regionOfChapterId/);
+  });
+
+  it("narrows to the chapters of one chapter's region with a sub-select, no second query", () => {
+    const { sql, replacements } = chaptersSql({ regionOfChapterId: 7 });
+    expect(sql).toContain(
+      'WHERE c.region_id = (SELECT o.region_id FROM chapters o WHERE o.id = :regionOf)',
+    );
+    expect(replacements).toMatchObject({ regionOf: 7 });
   });
 });
 

@@ -13,6 +13,8 @@ export interface ChapterFilter {
 export interface ChapterInfoFilter extends ChapterFilter {
   /** Only the chapters of these regions; all when absent. An empty list matches none. */
   regionIds?: readonly number[];
+  /** Only the chapters in the same region as this one (itself included). */
+  regionOfChapterId?: number;
 }
 
 /** Every chapter with what compliance needs: region, due day and active months. */
@@ -28,6 +30,11 @@ export function chaptersSql(filter: ChapterInfoFilter = {}): SqlQuery {
     const ids = requireIds('regionIds', filter.regionIds);
     conditions.push(ids.length === 0 ? '1 = 0' : 'c.region_id IN (:regionIds)');
     replacements.regionIds = ids;
+  }
+  if (filter.regionOfChapterId !== undefined) {
+    const [id] = requireIds('regionOfChapterId', [filter.regionOfChapterId]);
+    conditions.push('c.region_id = (SELECT o.region_id FROM chapters o WHERE o.id = :regionOf)');
+    replacements.regionOf = id;
   }
   const where = conditions.length > 0 ? `WHERE ${conditions.join(' AND ')}` : '';
   return {

@@ -1,6 +1,7 @@
 import type { SqlQuery } from '@tallyloom/reports';
 import type { Connection } from 'mariadb';
 import type { Transaction } from 'sequelize';
+import type { Sequelize } from 'sequelize-typescript';
 
 type Row = Record<string, unknown>;
 
@@ -27,6 +28,23 @@ export async function selectRows(transaction: Transaction, query: SqlQuery): Pro
     { sql: query.sql, namedPlaceholders: true, typeCast: undefined },
     query.replacements,
   );
+}
+
+/**
+ * `selectRows` outside any transaction, on a connection of Sequelize's pool held for this one
+ * statement: reads that do not depend on each other then run side by side.
+ */
+export async function pooledRows(sequelize: Sequelize, query: SqlQuery): Promise<Row[]> {
+  const manager = sequelize.connectionManager;
+  const connection = (await manager.getConnection({ type: 'read' })) as Connection;
+  try {
+    return await connection.query<Row[]>(
+      { sql: query.sql, namedPlaceholders: true, typeCast: undefined },
+      query.replacements,
+    );
+  } finally {
+    manager.releaseConnection(connection);
+  }
 }
 
 /** Runs one statement for many rows of values in the driver's bulk protocol. */

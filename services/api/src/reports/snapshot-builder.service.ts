@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import { periodDates, type MonthKey, type Period } from '@tallyloom/core';
+import { monthsBetween, periodDates, type MonthKey, type Period } from '@tallyloom/core';
 import {
   buildCampaignSnapshot,
   campaignCreditFromRow,
@@ -36,7 +36,7 @@ import { isoDate, jsonColumn } from '../common/sql/column-values';
 import { SettingsService } from '../settings/settings.service';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
 import type { RebuildSummary } from './report-jobs';
-import { batchRows, selectRows } from './driver-rows';
+import { batchRows, pooledRows, selectRows } from './driver-rows';
 import { chapterInfoFromRow, tallyStatusFromRow } from './snapshot-inputs';
 
 // One rebuild at a time across every worker: two jobs touching the same region would otherwise
@@ -72,31 +72,60 @@ export class SnapshotBuilder {
   ) {}
 
   /**
-   * The snapshots one chapter-month touches, and the campaigns its receipts credit. The region
-   * is built from its facts; the network from that region and the other regions' stored rows, so
-   * the work does not grow with the size of the network. Chapters have no stored rows: their
-   * figures are read live (ChapterFigures).
+   * The snapshots one chapter-month touches, and the campaigns its receipts credit. The region is
+   * rolled up from its chapters' tallies in the periods, with the flows of the month itself summed
+   * from its facts and those of the periods' other months taken from the region's stored month
+   * rows; the network from that region and the other regions' stored rows. So the work does not
+   * grow with the size of the network or the length of its history. Chapters have no stored
+   * rows: their figures are read live (ChapterFigures).
    */
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
-    return this.lockedThenInvalidate(async (transaction) => {
-      const [chapter] = await this.chapters(transaction, { chapterIds: [chapterId] });
+    return this.lockedThenInvalidate(async () => {
+      // Reads side by side on pooled connections, outside the write transaction: the lock keeps
+      // every other rebuild out, and each statement sees what was committed when it began.
+      const [inRegion, { fiscalYearStartMonth }] = await Promise.all([
+        this.pooled(chaptersSql({ regionOfChapterId: chapterId })).then((rows) =>
+          rows.map(chapterInfoFromRow),
+        ),
+        this.settings.current(),
+      ]);
+      const chapter = inRegion.find((each) => each.chapterId === chapterId);
       if (!chapter) throw new Error(`chapter ${chapterId} does not exist`);
-      const { fiscalYearStartMonth } = await this.settings.current();
       const targets = targetsOfChapterMonth(chapter, month, fiscalYearStartMonth, STORED_SCOPES);
-      const inRegion = await this.chapters(transaction, { regionIds: [chapter.regionId] });
-      const built = await this.build(
-        inRegion,
-        targets.filter((target) => target.scope !== 'network'),
-        { ...monthRangeOf(targets)!, chapterIds: inRegion.map((each) => each.chapterId) },
-        transaction,
-      );
       const periods = targets.filter((target) => target.scope === 'network').map((t) => t.period);
-      const otherRegions = await this.storedRegions(periods, chapter.regionId, transaction);
+      const range = monthRangeOf(targets)!;
+      const chapterIds = inRegion.map((each) => each.chapterId);
+      const [statuses, monthFlows, stored, regionIds, campaignIds] = await Promise.all([
+        this.pooled(tallyStatusSql({ chapterIds, ...range })).then((rows) =>
+          rows.map(tallyStatusFromRow),
+        ),
+        this.pooled(regionMonthFlowsSql({ chapterIds, from: month, to: month })).then((rows) =>
+          rows.map(regionMonthFlowsFromRow),
+        ),
+        this.storedRegionRows(periods, chapter.regionId, range),
+        this.pooled({ sql: 'SELECT id FROM regions', replacements: {} }).then((rows) =>
+          rows.map((row) => Number(row.id)),
+        ),
+        this.pooled(campaignsOfChapterMonthSql(chapterId, month)).then((rows) =>
+          rows.map((row) => Number(row.campaign_id)),
+        ),
+      ]);
+      const today = new Date().toISOString().slice(0, 10);
+      const flows = [
+        ...monthFlows,
+        ...(await this.otherMonthFlows(stored.ownMonths, month, range, chapterIds, today)),
+      ];
+      const rollup = new SnapshotRollup(
+        targets.filter((target) => target.scope === 'region'),
+        today,
+      );
+      rollup.addStatuses(inRegion, statuses);
+      rollup.addFlows(flows);
+      const built = rollup.snapshots();
+
+      const otherRegions = stored.otherRegions;
       // A region without a row for a period (nothing filed there since the last full rebuild)
       // is built from its facts, so its chapters still count as missing or open.
-      const regionIds = (
-        await this.select({ sql: 'SELECT id FROM regions', replacements: {} }, transaction)
-      ).map((row) => Number(row.id));
       const missing = periods.flatMap((period) =>
         regionIds
           .filter(
@@ -111,17 +140,7 @@ export class SnapshotBuilder {
           )
           .map((regionId) => ({ scope: 'region' as const, scopeId: regionId, period })),
       );
-      if (missing.length > 0) {
-        const missingIds = [...new Set(missing.map((target) => target.scopeId))];
-        const theirChapters = await this.chapters(transaction, { regionIds: missingIds });
-        const filled = await this.build(
-          theirChapters,
-          missing,
-          { ...monthRangeOf(missing)!, chapterIds: theirChapters.map((each) => each.chapterId) },
-          transaction,
-        );
-        otherRegions.push(...filled);
-      }
+      if (missing.length > 0) otherRegions.push(...(await this.regionsFromFacts(missing, today)));
       for (const period of periods) {
         const samePeriod = (each: { period: Pick<Period, 'kind' | 'key'> }) =>
           each.period.kind === period.kind && each.period.key === period.key;
@@ -131,109 +150,164 @@ export class SnapshotBuilder {
         ];
         built.push(networkFromRegions(period, regions));
       }
-      const asOf = new Date();
-      await this.writeSnapshots(built, asOf, transaction);
-      const campaignIds = (
-        await this.select(campaignsOfChapterMonthSql(chapterId, month), transaction)
-      ).map((row) => Number(row.campaign_id));
-      const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
-      return { snapshots: built.length, campaigns };
+      return this.inTransaction(async (transaction) => {
+        const asOf = new Date();
+        await this.writeSnapshots(built, asOf, transaction);
+        const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
+        return { snapshots: built.length, campaigns };
+      });
     });
   }
 
-  /** The stored region rows of these periods, except one region's. */
-  private async storedRegions(
+  /**
+   * The flows of the region's months in `range` other than `month`, from its stored month rows.
+   * A month without one (none built since the last full rebuild) is summed from its facts; a
+   * month after today can have no tally.
+   */
+  private async otherMonthFlows(
+    ownMonths: MonthFlows[],
+    month: MonthKey,
+    range: { from: MonthKey; to: MonthKey },
+    chapterIds: number[],
+    today: string,
+  ): Promise<MonthFlows[]> {
+    const storedMonths = new Set(ownMonths.map((row) => row.month));
+    const unbuilt = monthsBetween(range.from, range.to).filter(
+      (each) => each !== month && each <= today.slice(0, 7) && !storedMonths.has(each),
+    );
+    const others = ownMonths.filter((row) => row.month !== month);
+    if (unbuilt.length === 0) return others;
+    const wanted = new Set(unbuilt);
+    const fromFacts = (
+      await this.pooled(regionMonthFlowsSql({ chapterIds, from: unbuilt[0], to: unbuilt.at(-1)! }))
+    )
+      .map(regionMonthFlowsFromRow)
+      .filter((row) => wanted.has(row.month));
+    return [...others, ...fromFacts];
+  }
+
+  /** Regions' snapshots for these targets, rolled up from their chapters' facts. */
+  private async regionsFromFacts(
+    targets: SnapshotTarget[],
+    today: string,
+  ): Promise<BuiltSnapshot[]> {
+    const regionIds = [...new Set(targets.map((target) => target.scopeId))];
+    const chapters = (await this.pooled(chaptersSql({ regionIds }))).map(chapterInfoFromRow);
+    const filter = {
+      ...monthRangeOf(targets)!,
+      chapterIds: chapters.map((each) => each.chapterId),
+    };
+    const [flows, statuses] = await Promise.all([
+      this.pooled(regionMonthFlowsSql(filter)).then((rows) => rows.map(regionMonthFlowsFromRow)),
+      this.pooled(tallyStatusSql(filter)).then((rows) => rows.map(tallyStatusFromRow)),
+    ]);
+    return rollUpSnapshots({ flows, chapters, statuses, today }, targets);
+  }
+
+  /**
+   * Stored region rows: the other regions' rows of these periods (for the network), and one
+   * region's month rows in `range` as flows (stock is read from the statuses instead).
+   */
+  private async storedRegionRows(
     periods: Period[],
-    exceptRegionId: number,
-    transaction: Transaction,
-  ): Promise<Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>> {
-    const replacements: Record<string, unknown> = { exceptRegionId };
+    regionId: number,
+    range: { from: MonthKey; to: MonthKey },
+  ): Promise<{
+    otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>;
+    ownMonths: MonthFlows[];
+  }> {
+    const replacements: Record<string, unknown> = {
+      regionId,
+      fromKey: range.from,
+      toKey: range.to,
+    };
     const wanted = periods.map((period, index) => {
       replacements[`kind${index}`] = period.kind;
       replacements[`key${index}`] = period.key;
       return `(period_kind = :kind${index} AND period_key = :key${index})`;
     });
-    const rows = await this.select(
-      {
-        sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies,
-                     source_revisions
-                FROM report_snapshots
-               WHERE scope = 'region' AND scope_id <> :exceptRegionId AND (${wanted.join(' OR ')})`,
-        replacements,
-      },
-      transaction,
-    );
-    return rows.map((row) => ({
-      scopeId: Number(row.scope_id),
-      period: { kind: row.period_kind as Period['kind'], key: String(row.period_key) },
-      figures: jsonColumn(row.figures),
-      compliance: jsonColumn(row.compliance),
-      pendingTallies: Number(row.pending_tallies),
-      sourceRevisions: jsonColumn(row.source_revisions),
-    }));
+    const rows = await this.pooled({
+      sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies,
+                   source_revisions
+              FROM report_snapshots
+             WHERE scope = 'region' AND (
+                   (scope_id <> :regionId AND (${wanted.join(' OR ')}))
+                OR (scope_id = :regionId AND period_kind = 'month'
+                    AND period_key BETWEEN :fromKey AND :toKey))`,
+      replacements,
+    });
+    const otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }> = [];
+    const ownMonths: MonthFlows[] = [];
+    for (const row of rows) {
+      const scopeId = Number(row.scope_id);
+      if (scopeId === regionId) {
+        ownMonths.push({
+          chapterId: null,
+          regionId,
+          month: String(row.period_key),
+          figures: jsonColumn(row.figures),
+        });
+        continue;
+      }
+      otherRegions.push({
+        scopeId,
+        period: { kind: row.period_kind as Period['kind'], key: String(row.period_key) },
+        figures: jsonColumn(row.figures),
+        compliance: jsonColumn(row.compliance),
+        pendingTallies: Number(row.pending_tallies),
+        sourceRevisions: jsonColumn(row.source_revisions),
+      });
+    }
+    return { otherRegions, ownMonths };
   }
 
   /** Every stored scope × every period from the network's first tally, and every campaign. */
   async rebuildAll(progress: Progress = () => Promise.resolve()): Promise<RebuildSummary> {
-    return this.lockedThenInvalidate(async (transaction) => {
-      const chapters = await this.chapters(transaction);
-      const { fiscalYearStartMonth } = await this.settings.current();
-      // The flows' GROUP BY is the longest read: it runs on a connection of its own while the
-      // statuses are read and rolled up. Each statement of a READ COMMITTED transaction sees
-      // what was committed when it began, so this is no less consistent, and a tally approved
-      // meanwhile queues its own rebuild, which waits for this one's lock.
-      const flowsRead = this.regionFlowsInParts(chapters);
-      // Awaited below; this only keeps a failure meanwhile from going unhandled.
-      flowsRead.catch(() => undefined);
-      // Every tally in any state: compliance, pending, stock, sources, and which months exist.
-      const statuses = await this.statuses({}, transaction);
-      // From the network's first tally to this month, months nobody filed count too.
-      const firstMonth = statuses.reduce<string | null>(
-        (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
-        null,
-      );
-      const today = new Date().toISOString().slice(0, 10);
-      const expected = firstMonth
-        ? expectedChapterMonths(chapters, firstMonth, today.slice(0, 7))
-        : [];
-      const targets = targetsOfMonths(
-        chapters,
-        [...statuses, ...expected],
-        fiscalYearStartMonth,
-        STORED_SCOPES,
-      );
-      const rollup = new SnapshotRollup(targets, today);
-      rollup.addStatuses(chapters, statuses);
-      await progress(10);
-      rollup.addFlows(await flowsRead);
-      const built = rollup.snapshots();
-      await progress(40);
-      const asOf = new Date();
-      await this.writeSnapshots(built, asOf, transaction, async (done) =>
-        progress(40 + Math.floor((50 * done) / Math.max(built.length, 1))),
-      );
-      const campaignIds = (
-        await this.select({ sql: 'SELECT id FROM campaigns', replacements: {} }, transaction)
-      ).map((row) => Number(row.id));
-      const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
-      await progress(100);
-      return { snapshots: built.length, campaigns };
-    });
-  }
-
-  private async build(
-    chapters: ChapterInfo[],
-    targets: SnapshotTarget[],
-    filter: FactsFilter,
-    transaction: Transaction,
-  ): Promise<BuiltSnapshot[]> {
-    const flows = (await selectRows(transaction, regionMonthFlowsSql(filter))).map(
-      regionMonthFlowsFromRow,
-    );
-    const today = new Date().toISOString().slice(0, 10);
-    return rollUpSnapshots(
-      { flows, chapters, statuses: await this.statuses(filter, transaction), today },
-      targets,
+    return this.lockedThenInvalidate(() =>
+      this.inTransaction(async (transaction) => {
+        const chapters = await this.chapters(transaction);
+        const { fiscalYearStartMonth } = await this.settings.current();
+        // The flows' GROUP BY is the longest read: it runs on a connection of its own while the
+        // statuses are read and rolled up. Each statement of a READ COMMITTED transaction sees
+        // what was committed when it began, so this is no less consistent, and a tally approved
+        // meanwhile queues its own rebuild, which waits for this one's lock.
+        const flowsRead = this.regionFlowsInParts(chapters);
+        // Awaited below; this only keeps a failure meanwhile from going unhandled.
+        flowsRead.catch(() => undefined);
+        // Every tally in any state: compliance, pending, stock, sources, and which months exist.
+        const statuses = await this.statuses({}, transaction);
+        // From the network's first tally to this month, months nobody filed count too.
+        const firstMonth = statuses.reduce<string | null>(
+          (earliest, { month }) => (earliest === null || month < earliest ? month : earliest),
+          null,
+        );
+        const today = new Date().toISOString().slice(0, 10);
+        const expected = firstMonth
+          ? expectedChapterMonths(chapters, firstMonth, today.slice(0, 7))
+          : [];
+        const targets = targetsOfMonths(
+          chapters,
+          [...statuses, ...expected],
+          fiscalYearStartMonth,
+          STORED_SCOPES,
+        );
+        const rollup = new SnapshotRollup(targets, today);
+        rollup.addStatuses(chapters, statuses);
+        await progress(10);
+        rollup.addFlows(await flowsRead);
+        const built = rollup.snapshots();
+        await progress(40);
+        const asOf = new Date();
+        await this.writeSnapshots(built, asOf, transaction, async (done) =>
+          progress(40 + Math.floor((50 * done) / Math.max(built.length, 1))),
+        );
+        const campaignIds = (
+          await this.select({ sql: 'SELECT id FROM campaigns', replacements: {} }, transaction)
+        ).map((row) => Number(row.id));
+        const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
+        await progress(100);
+        return { snapshots: built.length, campaigns };
+      }),
     );
   }
 
@@ -361,20 +435,30 @@ export class SnapshotBuilder {
   }
 
   /** Cached dashboards are dropped once the new snapshots are committed, not before. */
-  private async lockedThenInvalidate<T>(
-    work: (transaction: Transaction) => Promise<T>,
-  ): Promise<T> {
+  private async lockedThenInvalidate<T>(work: () => Promise<T>): Promise<T> {
     const result = await this.locked(work);
     await this.views.invalidate();
     return result;
   }
 
+  /** The writes (and a full rebuild's reads) in one READ COMMITTED transaction. */
+  private inTransaction<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
+    return this.sequelize.transaction(
+      { isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED },
+      work,
+    );
+  }
+
+  private pooled(query: SqlQuery): Promise<Row[]> {
+    return pooledRows(this.sequelize, query);
+  }
+
   /**
-   * Runs the rebuild in one READ COMMITTED transaction while a named lock is held on a second
-   * connection. The lock is released only after the work has committed, so the next rebuild's
-   * reads see every snapshot and tally committed before it won the lock.
+   * Runs the rebuild while a named lock is held on a connection of its own. The lock is released
+   * only after the work has committed, so the next rebuild's reads see every snapshot and tally
+   * committed before it won the lock.
    */
-  private async locked<T>(work: (transaction: Transaction) => Promise<T>): Promise<T> {
+  private async locked<T>(work: () => Promise<T>): Promise<T> {
     return this.sequelize.transaction(async (lockHolder) => {
       const [{ got }] = await this.select(
         {
@@ -385,10 +469,7 @@ export class SnapshotBuilder {
       );
       if (Number(got) !== 1) throw new Error('another snapshot rebuild held the lock too long');
       try {
-        return await this.sequelize.transaction(
-          { isolationLevel: Transaction.ISOLATION_LEVELS.READ_COMMITTED },
-          work,
-        );
+        return await work();
       } finally {
         await this.select(
           { sql: 'SELECT RELEASE_LOCK(:name) AS released', replacements: { name: LOCK_NAME } },
