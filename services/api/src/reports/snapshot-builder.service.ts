@@ -29,10 +29,11 @@ import {
   type SqlQuery,
   type TallyStatus,
 } from '@tallyloom/reports';
+import type { Connection } from 'mariadb';
 import { QueryTypes, Transaction } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { ViewCache } from '../cache/view-cache';
-import { isoDate, jsonColumn } from '../common/sql/column-values';
+import { isoDate, jsonColumn, orNull } from '../common/sql/column-values';
 import { SettingsService } from '../settings/settings.service';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
 import type { RebuildSummary } from './report-jobs';
@@ -54,6 +55,21 @@ const UPSERT_SNAPSHOT_SQL = `INSERT INTO report_snapshots (scope, scope_id, peri
     as_of = VALUES(as_of)`;
 
 type Progress = (percent: number) => Promise<unknown>;
+
+/** A region and the months its chapters are active in, first to last ('YYYY-MM'; null if none). */
+interface RegionSpan {
+  regionId: number;
+  firstMonth: MonthKey | null;
+  lastMonth: MonthKey | null;
+}
+
+const REGION_SPANS_SQL: SqlQuery = {
+  sql: `SELECT g.id AS region_id, DATE_FORMAT(MIN(c.active_from), :monthFormat) AS first_month,
+               DATE_FORMAT(MAX(COALESCE(c.active_to, :openEnd)), :monthFormat) AS last_month
+          FROM regions g LEFT JOIN chapters c ON c.region_id = g.id
+         GROUP BY g.id`,
+  replacements: { monthFormat: '%Y-%m', openEnd: '9999-12-31' },
+};
 type Row = Record<string, unknown>;
 
 /**
@@ -95,7 +111,7 @@ export class SnapshotBuilder {
       const periods = targets.filter((target) => target.scope === 'network').map((t) => t.period);
       const range = monthRangeOf(targets)!;
       const chapterIds = inRegion.map((each) => each.chapterId);
-      const [statuses, monthFlows, stored, regionIds, campaignIds] = await Promise.all([
+      const [statuses, monthFlows, stored, campaignIds] = await Promise.all([
         this.pooled(tallyStatusSql({ chapterIds, ...range })).then((rows) =>
           rows.map(tallyStatusFromRow),
         ),
@@ -103,9 +119,6 @@ export class SnapshotBuilder {
           rows.map(regionMonthFlowsFromRow),
         ),
         this.storedRegionRows(periods, chapter.regionId, range),
-        this.pooled({ sql: 'SELECT id FROM regions', replacements: {} }).then((rows) =>
-          rows.map((row) => Number(row.id)),
-        ),
         this.pooled(campaignsOfChapterMonthSql(chapterId, month)).then((rows) =>
           rows.map((row) => Number(row.campaign_id)),
         ),
@@ -123,22 +136,27 @@ export class SnapshotBuilder {
       rollup.addFlows(flows);
       const built = rollup.snapshots();
 
-      const otherRegions = stored.otherRegions;
+      const { otherRegions, regions } = stored;
       // A region without a row for a period (nothing filed there since the last full rebuild)
-      // is built from its facts, so its chapters still count as missing or open.
+      // is built from its facts, so its chapters still count as missing or open; unless none of
+      // its chapters was active then (a region set up later), which adds nothing.
+      const currentMonth = today.slice(0, 7);
       const missing = periods.flatMap((period) =>
-        regionIds
+        regions
           .filter(
-            (regionId) =>
-              regionId !== chapter.regionId &&
+            (region) =>
+              region.regionId !== chapter.regionId &&
+              region.firstMonth !== null &&
+              region.firstMonth <= (period.to < currentMonth ? period.to : currentMonth) &&
+              region.lastMonth! >= period.from &&
               !otherRegions.some(
                 (each) =>
-                  each.scopeId === regionId &&
+                  each.scopeId === region.regionId &&
                   each.period.kind === period.kind &&
                   each.period.key === period.key,
               ),
           )
-          .map((regionId) => ({ scope: 'region' as const, scopeId: regionId, period })),
+          .map((region) => ({ scope: 'region' as const, scopeId: region.regionId, period })),
       );
       if (missing.length > 0) otherRegions.push(...(await this.regionsFromFacts(missing, today)));
       for (const period of periods) {
@@ -150,7 +168,8 @@ export class SnapshotBuilder {
         ];
         built.push(networkFromRegions(period, regions));
       }
-      return this.inTransaction(async (transaction) => {
+      // Writes only: the default isolation does, and one statement fewer.
+      return this.sequelize.transaction(async (transaction) => {
         const asOf = new Date();
         await this.writeSnapshots(built, asOf, transaction);
         const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
@@ -205,14 +224,15 @@ export class SnapshotBuilder {
   }
 
   /**
-   * Stored region rows: the other regions' rows of these periods (for the network), and one
-   * region's month rows in `range` as flows (stock is read from the statuses instead).
+   * Every region with its chapters' active months, and stored rows: the other regions' rows of these periods (for the
+   * network), and one region's month rows in `range` as flows (stock is read from the statuses).
    */
   private async storedRegionRows(
     periods: Period[],
     regionId: number,
     range: { from: MonthKey; to: MonthKey },
   ): Promise<{
+    regions: RegionSpan[];
     otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>;
     ownMonths: MonthFlows[];
   }> {
@@ -226,16 +246,19 @@ export class SnapshotBuilder {
       replacements[`key${index}`] = period.key;
       return `(period_kind = :kind${index} AND period_key = :key${index})`;
     });
-    const rows = await this.pooled({
-      sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies,
-                   source_revisions
-              FROM report_snapshots
-             WHERE scope = 'region' AND (
-                   (scope_id <> :regionId AND (${wanted.join(' OR ')}))
-                OR (scope_id = :regionId AND period_kind = 'month'
-                    AND period_key BETWEEN :fromKey AND :toKey))`,
-      replacements,
-    });
+    const [regions, rows] = await Promise.all([
+      this.pooled(REGION_SPANS_SQL),
+      this.pooled({
+        sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies,
+                     source_revisions
+                FROM report_snapshots
+               WHERE scope = 'region' AND (
+                     (scope_id <> :regionId AND (${wanted.join(' OR ')}))
+                  OR (scope_id = :regionId AND period_kind = 'month'
+                      AND period_key BETWEEN :fromKey AND :toKey))`,
+        replacements,
+      }),
+    ]);
     const otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }> = [];
     const ownMonths: MonthFlows[] = [];
     for (const row of rows) {
@@ -258,7 +281,15 @@ export class SnapshotBuilder {
         sourceRevisions: jsonColumn(row.source_revisions),
       });
     }
-    return { otherRegions, ownMonths };
+    return {
+      regions: regions.map((row) => ({
+        regionId: Number(row.region_id),
+        firstMonth: orNull(row.first_month, String),
+        lastMonth: orNull(row.last_month, String),
+      })),
+      otherRegions,
+      ownMonths,
+    };
   }
 
   /** Every stored scope × every period from the network's first tally, and every campaign. */
@@ -454,28 +485,27 @@ export class SnapshotBuilder {
   }
 
   /**
-   * Runs the rebuild while a named lock is held on a connection of its own. The lock is released
-   * only after the work has committed, so the next rebuild's reads see every snapshot and tally
-   * committed before it won the lock.
+   * Runs the rebuild while a named lock is held on a connection of its own (a named lock belongs
+   * to the connection, not to a transaction). The lock is released only after the work has
+   * committed, so the next rebuild's reads see every snapshot and tally committed before it won
+   * the lock; should the connection die, the server releases the lock itself.
    */
   private async locked<T>(work: () => Promise<T>): Promise<T> {
-    return this.sequelize.transaction(async (lockHolder) => {
-      const [{ got }] = await this.select(
-        {
-          sql: 'SELECT GET_LOCK(:name, :wait) AS got',
-          replacements: { name: LOCK_NAME, wait: LOCK_WAIT_SECONDS },
-        },
-        lockHolder,
+    const manager = this.sequelize.connectionManager;
+    const holder = (await manager.getConnection({ type: 'write' })) as Connection;
+    try {
+      const [{ got }] = await holder.query<Array<{ got: number | null }>>(
+        'SELECT GET_LOCK(?, ?) AS got',
+        [LOCK_NAME, LOCK_WAIT_SECONDS],
       );
       if (Number(got) !== 1) throw new Error('another snapshot rebuild held the lock too long');
       try {
         return await work();
       } finally {
-        await this.select(
-          { sql: 'SELECT RELEASE_LOCK(:name) AS released', replacements: { name: LOCK_NAME } },
-          lockHolder,
-        );
+        await holder.query('SELECT RELEASE_LOCK(?)', [LOCK_NAME]);
       }
-    });
+    } finally {
+      manager.releaseConnection(holder);
+    }
   }
 }
