@@ -24,7 +24,8 @@ export interface BenchActor {
 
 export type ChildTask =
   | {
-      mode: 'job';
+      /** The job's read alone: the same query streamed in the same batches, then dropped. */
+      mode: 'read' | 'job';
       format: 'xlsx' | 'csv';
       filters: { from: string; to: string };
       actor: BenchActor;
@@ -47,6 +48,10 @@ export interface ChildResult {
 }
 
 interface ReceiptsProducerLike {
+  rows(
+    params: { format: 'xlsx' | 'csv'; bom: boolean; filters: { from?: string; to?: string } },
+    actor: BenchActor,
+  ): { batches: AsyncIterable<unknown[][]>; expected: Promise<number> };
   produce(
     params: { format: 'xlsx' | 'csv'; bom: boolean; filters: { from?: string; to?: string } },
     run: {
@@ -85,7 +90,7 @@ async function receiptColumns(): Promise<ExportColumn[]> {
   return columns(true);
 }
 
-async function runJob(task: Extract<ChildTask, { mode: 'job' }>): Promise<ChildResult> {
+async function runJob(task: Extract<ChildTask, { mode: 'read' | 'job' }>): Promise<ChildResult> {
   const context = await apiContext({ processors: true });
   try {
     const Producer = await apiExport<Type<ReceiptsProducerLike>>(
@@ -93,6 +98,18 @@ async function runJob(task: Extract<ChildTask, { mode: 'job' }>): Promise<ChildR
       'ReceiptsExportProducer',
     );
     const producer = context.get(Producer, { strict: false });
+    if (task.mode === 'read') {
+      return await measured(async () => {
+        const { batches, expected } = producer.rows(
+          { format: task.format, bom: false, filters: task.filters },
+          task.actor,
+        );
+        let rows = 0;
+        for await (const batch of batches) rows += batch.length;
+        await expected;
+        return rows;
+      });
+    }
     return await measured(async () => {
       const outcome = await producer.produce(
         { format: task.format, bom: false, filters: task.filters },
@@ -201,7 +218,7 @@ async function runFloor(task: Extract<ChildTask, { mode: 'floor' }>): Promise<Ch
 
 async function main(): Promise<void> {
   const task = JSON.parse(process.argv[2]) as ChildTask;
-  const result = task.mode === 'job' ? await runJob(task) : await runFloor(task);
+  const result = task.mode === 'floor' ? await runFloor(task) : await runJob(task);
   process.send!({ result });
 }
 

@@ -11,7 +11,7 @@ import {
 import { receiptScope, SCOPE_CHAPTER } from '../../receipts/receipt-scope';
 import type { ExportProducer, ExportResult, ExportRun } from '../export-producer';
 import type { ExportColumn, ExportTableSpec } from '../writers/export-table';
-import { columnSql, streamedRows, whereSql } from './streamed-rows';
+import { columnSql, streamedRows, whereSql, type StreamedCell } from './streamed-rows';
 import { writeTableCells, type TableExportParams } from './table-file';
 
 const SENDER_COLUMNS: ExportColumn[] = [
@@ -139,13 +139,29 @@ export class ReceiptsExportProducer implements ExportProducer<
     params: TableExportParams<ReceiptListParams>,
     run: ExportRun,
   ): Promise<ExportResult> {
-    const showSender = can(run.actor.role, 'senders.read');
+    const { spec, batches, expected } = this.rows(params, run.actor);
+    return writeTableCells(params, spec, batches, expected, run);
+  }
+
+  /**
+   * The table and its rows as the file will hold them, streamed in batches, with the row count
+   * (counted beside the read, on another connection: only the progress waits for it).
+   */
+  rows(
+    params: TableExportParams<ReceiptListParams>,
+    actor: ExportRun['actor'],
+  ): {
+    spec: ExportTableSpec;
+    batches: AsyncIterable<StreamedCell[][]>;
+    expected: Promise<number>;
+  } {
+    const showSender = can(actor.role, 'senders.read');
     const spec: ExportTableSpec = {
       sheetName: 'Parcel receipts',
       title: 'Parcel receipts',
       columns: receiptColumns(showSender),
     };
-    const where = within(receiptScope(run.actor), receiptListFilters(params.filters));
+    const where = within(receiptScope(actor), receiptListFilters(params.filters));
     const cells = cellSql(this.receipts);
     // For xlsx, receipts first (STRAIGHT_JOIN keeps the order of the FROM list): the server
     // sorts them and sends the first row at once, so the slow writer works while the rest is
@@ -156,7 +172,7 @@ export class ReceiptsExportProducer implements ExportProducer<
     const receiptsFirst =
       params.format === 'xlsx' &&
       params.filters.regionId === undefined &&
-      ROLE_SCOPE[run.actor.role] !== 'region';
+      ROLE_SCOPE[actor.role] !== 'region';
     // Only the columns the person may see are selected: sender details never leave the database
     // for a role without them.
     const select = spec.columns.map((column) => cells[column.key]).join(', ');
@@ -168,14 +184,10 @@ export class ReceiptsExportProducer implements ExportProducer<
       whereSql(this.receipts, where),
       receiptListOrderSql(receiptSortKeys(params.filters)),
     ].join(' ');
-    // Counted beside the read (another connection): only the progress waits for it.
-    const expected = this.receipts.count({ where, include: [SCOPE_CHAPTER] });
-    return writeTableCells(
-      params,
+    return {
       spec,
-      streamedRows(this.receipts, sql, BATCH_ROWS),
-      expected,
-      run,
-    );
+      batches: streamedRows(this.receipts, sql, BATCH_ROWS),
+      expected: this.receipts.count({ where, include: [SCOPE_CHAPTER] }),
+    };
   }
 }

@@ -100,14 +100,25 @@ interface ZipInternals {
   zip?: NodeJS.EventEmitter;
 }
 interface SheetStreamInternals {
-  stream?: { pipes?: Array<NodeJS.EventEmitter & { _writableState?: { needDrain?: boolean } }> };
+  stream?: {
+    pipes?: Array<
+      NodeJS.EventEmitter & { _writableState?: { needDrain?: boolean; length?: number } }
+    >;
+  };
 }
+
+/**
+ * How much uncompressed sheet XML may wait for deflate before the writer stops adding rows: the
+ * two then work side by side (deflate runs on libuv's threads), and memory stays bounded.
+ */
+const ZIP_BACKLOG_BYTES = 8 * 1024 * 1024;
 
 /**
  * exceljs writes a sheet's XML into the zip without back-pressure: each row goes into the zip's
  * intake stream whatever it holds, and deflate takes one chunk per turn of the event loop, so a
  * reader faster than deflate piles the uncompressed sheet up in memory (about 0.6 KB per row).
- * Between batches this waits until the intake has drained, so memory stays flat.
+ * Between batches this yields a turn (deflate's turn), and once the intake holds more than
+ * ZIP_BACKLOG_BYTES it waits until deflate has emptied it, so memory stays flat.
  */
 async function zipCaughtUp(
   workbook: ExcelJS.stream.xlsx.WorkbookWriter,
@@ -115,7 +126,8 @@ async function zipCaughtUp(
 ): Promise<void> {
   const intake = (worksheet as unknown as SheetStreamInternals).stream?.pipes?.[0];
   const zip = (workbook as unknown as ZipInternals).zip;
-  if (!intake?._writableState?.needDrain || !zip) {
+  const backlog = intake?._writableState?.length ?? 0;
+  if (!intake?._writableState?.needDrain || !zip || backlog < ZIP_BACKLOG_BYTES) {
     await nextTurn();
     return;
   }
