@@ -99,6 +99,10 @@ export async function startMariaDb(options: MariaDbOptions): Promise<RunningMari
       '--default-time-zone=+00:00',
       '--skip-name-resolve',
       '--innodb-buffer-pool-size=256M',
+      // Background flushing paced for a local SSD rather than a spinning disk (the default 200),
+      // so a bulk load's dirty pages are written back in seconds, not minutes.
+      // Source: MySQL Reference Manual, "Configuring InnoDB I/O Capacity" (1000 for fast SSDs).
+      '--innodb-io-capacity=1000',
     ],
     // Own process group: a Ctrl-C in the terminal reaches us, and we shut the server down in order.
     { detached: true, stdio: ['ignore', logFd, logFd] },

@@ -120,8 +120,11 @@ export async function benchReports(input: ReportsBenchInput): Promise<ReportsBen
       if (done % 100 === 0) step(`  ${done} chapters`);
     });
 
-    const waited = await settledAfterLoad(input.databaseUrl);
-    step(`  the server wrote back the load's pages in ${waited.toFixed(0)} s`);
+    const settled = await settledAfterLoad(input.databaseUrl);
+    step(
+      `  the server wrote back the load's pages for ${settled.seconds.toFixed(0)} s ` +
+        `(${settled.dirtyPages} still dirty)`,
+    );
     step('Raw GROUP BY over the approved revisions…');
     const groupByMs = await rawGroupBy(input.databaseUrl);
     step('Full rebuild (first build of the new chapters)…');

@@ -4,12 +4,17 @@ import { connectTo } from './db-connection';
 /**
  * Waits until InnoDB has written back the pages a bulk load left dirty (at most `maxSeconds`),
  * so no measurement shares the machine with the server's background flushing: a phase measured
- * during it and its baseline measured after it would not compare. Returns how long it waited.
+ * during it and its baseline measured after it would not compare. Says how long it waited and
+ * how many pages were still dirty.
  */
-export async function settledAfterLoad(databaseUrl: string, maxSeconds = 120): Promise<number> {
+export async function settledAfterLoad(
+  databaseUrl: string,
+  maxSeconds = 120,
+): Promise<{ seconds: number; dirtyPages: number }> {
   const connection = await connectTo(databaseUrl);
   const started = Date.now();
   try {
+    let dirty = 0;
     for (;;) {
       const rows = await connection.query<Array<{ Variable_name: string; Value: string }>>(
         `SHOW GLOBAL STATUS WHERE Variable_name IN
@@ -17,12 +22,12 @@ export async function settledAfterLoad(databaseUrl: string, maxSeconds = 120): P
       );
       const value = (name: string) =>
         Number(rows.find((row) => row.Variable_name === name)?.Value ?? 0);
-      const dirty = value('Innodb_buffer_pool_pages_dirty');
+      dirty = value('Innodb_buffer_pool_pages_dirty');
       if (dirty <= value('Innodb_buffer_pool_pages_total') / 100) break;
       if (Date.now() - started > maxSeconds * 1000) break;
       await sleep(1000);
     }
-    return (Date.now() - started) / 1000;
+    return { seconds: (Date.now() - started) / 1000, dirtyPages: dirty };
   } finally {
     await connection.end();
   }
