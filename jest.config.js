@@ -29,7 +29,14 @@ module.exports = {
     { ...shared, displayName: 'reports', testMatch: ['<rootDir>/reports/src/**/*.spec.ts'] },
     { ...shared, displayName: 'api', testMatch: ['<rootDir>/services/api/src/**/*.spec.ts'] },
     { ...shared, displayName: 'db', testMatch: ['<rootDir>/db/**/*.spec.ts'] },
-    { ...shared, displayName: 'e2e', testMatch: ['<rootDir>/test/e2e/**/*.e2e-spec.ts'] },
+    {
+      ...shared,
+      displayName: 'e2e',
+      testMatch: ['<rootDir>/test/e2e/**/*.e2e-spec.ts'],
+      // Starting a test app (Nest, MariaDB pool, Redis) can take more than jest's 5 s when the
+      // two cores are shared with the other suites; a suite may still ask for more.
+      testTimeout: 60_000,
+    },
     {
       ...shared,
       displayName: 'browser',
