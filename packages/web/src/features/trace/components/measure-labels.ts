@@ -4,7 +4,7 @@ import { TRACE_MEASURES, type TraceMeasure } from '@tallyloom/core';
 export const TRACE_MEASURE_LABELS: Record<TraceMeasure, string> = {
   panelsAccepted: 'Panels received',
   panelsSetAside: 'Panels set aside',
-  panelsUsed: 'Panels used',
+  panelsUsed: 'Panels used in assembly',
   blanketsAssembled: 'Blankets made',
   blanketsReceived: 'Finished blankets received',
   blanketsGiven: 'Blankets given',
