@@ -153,14 +153,19 @@ const targetKey = (target: SnapshotTarget) =>
 const periodId = (period: Pick<Period, 'kind' | 'key'>) => `${period.kind}:${period.key}`;
 const scopeKey = (scope: SnapshotScope, id: number) => `${scope}:${id}`;
 
+/** The value of `key`, made and stored first when the map has none. */
+function entryOf<K, V>(map: Map<K, V>, key: K, make: () => V): V {
+  let value = map.get(key);
+  if (value === undefined) {
+    value = make();
+    map.set(key, value);
+  }
+  return value;
+}
+
 function groupBy<T>(items: readonly T[], keyOf: (item: T) => number): Map<number, T[]> {
   const groups = new Map<number, T[]>();
-  for (const item of items) {
-    const key = keyOf(item);
-    const list = groups.get(key);
-    if (list) list.push(item);
-    else groups.set(key, [item]);
-  }
+  for (const item of items) entryOf(groups, keyOf(item), () => []).push(item);
   return groups;
 }
 
@@ -225,9 +230,7 @@ export class SnapshotRollup {
         byPeriod.set(periodId(target.period), scopes);
         this.scopesOfPeriod.set(target.period, scopes);
         for (const month of monthsOf(target.period)) {
-          const periods = this.periodsOfMonth.get(month);
-          if (periods) periods.push(target.period);
-          else this.periodsOfMonth.set(month, [target.period]);
+          entryOf(this.periodsOfMonth, month, () => []).push(target.period);
         }
       }
       scopes.set(scopeKey(target.scope, target.scopeId), snapshot);
@@ -245,17 +248,8 @@ export class SnapshotRollup {
       if (row.chapterId !== null) covered.push(scopeKey('chapter', row.chapterId));
       for (const scope of covered) {
         if (!this.wantedScopes.has(scope)) continue;
-        let months = this.flowBuckets.get(scope);
-        if (!months) {
-          months = new Map();
-          this.flowBuckets.set(scope, months);
-        }
-        let figures = months.get(row.month);
-        if (!figures) {
-          figures = emptySnapshotFigures();
-          months.set(row.month, figures);
-        }
-        addFlowsInPlace(figures, row.figures);
+        const months = entryOf(this.flowBuckets, scope, () => new Map<MonthKey, SnapshotFigures>());
+        addFlowsInPlace(entryOf(months, row.month, emptySnapshotFigures), row.figures);
       }
     }
   }
@@ -266,22 +260,14 @@ export class SnapshotRollup {
    */
   addStatuses(chapters: readonly ChapterInfo[], statuses: readonly TallyStatus[]): void {
     const buckets = new Map<string, Map<MonthKey, StatusBucket>>();
-    const bucketsOf = (scope: string) => {
-      let months = buckets.get(scope);
-      if (!months) {
-        months = new Map();
-        buckets.set(scope, months);
-      }
-      return months;
-    };
-    const bucketIn = (months: Map<MonthKey, StatusBucket>, month: MonthKey) => {
-      let bucket = months.get(month);
-      if (!bucket) {
-        bucket = { compliance: emptyCompliance(), pendingTallies: 0, sources: [] };
-        months.set(month, bucket);
-      }
-      return bucket;
-    };
+    const bucketsOf = (scope: string) =>
+      entryOf(buckets, scope, () => new Map<MonthKey, StatusBucket>());
+    const bucketIn = (months: Map<MonthKey, StatusBucket>, month: MonthKey) =>
+      entryOf(months, month, () => ({
+        compliance: emptyCompliance(),
+        pendingTallies: 0,
+        sources: [] as Array<[number, number]>,
+      }));
     const months = [...this.periodsOfMonth.keys()];
     const statusesOf = groupBy(statuses, (status) => status.chapterId);
     for (const chapter of chapters) {
@@ -462,9 +448,7 @@ export function targetsOfMonths(
     if (regionId === undefined) continue;
     for (const [scope, byId] of monthsOfScope) {
       const scopeId = holding(scope, { chapterId, regionId });
-      const months = byId.get(scopeId);
-      if (months) months.add(month);
-      else byId.set(scopeId, new Set([month]));
+      entryOf(byId, scopeId, () => new Set<MonthKey>()).add(month);
     }
   }
   const periodsOf = new Map<MonthKey, Period[]>();
@@ -472,11 +456,9 @@ export function targetsOfMonths(
   for (const [scope, byId] of monthsOfScope) {
     for (const [scopeId, months] of byId) {
       for (const month of months) {
-        let periods = periodsOf.get(month);
-        if (!periods) {
-          periods = periodsContaining(month, fiscalYearStartMonth);
-          periodsOf.set(month, periods);
-        }
+        const periods = entryOf(periodsOf, month, () =>
+          periodsContaining(month, fiscalYearStartMonth),
+        );
         for (const period of periods) {
           const target = { scope, scopeId, period };
           targets.set(targetKey(target), target);

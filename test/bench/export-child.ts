@@ -3,6 +3,7 @@ import { parse } from 'csv-parse';
 import * as ExcelJS from 'exceljs';
 import { once } from 'node:events';
 import { createReadStream, createWriteStream } from 'node:fs';
+import type { ReceiptsExportProducer } from '../../services/api/src/exports/producers/receipts-export.producer';
 import type { ExportColumn } from '../../services/api/src/exports/writers/export-table';
 import { apiContext, apiExport } from './api-context';
 import { timed } from './timed';
@@ -47,21 +48,8 @@ export interface ChildResult {
   peakRssGrowthMb: number;
 }
 
-interface ReceiptsProducerLike {
-  rows(
-    params: { format: 'xlsx' | 'csv'; bom: boolean; filters: { from?: string; to?: string } },
-    actor: BenchActor,
-  ): { batches: AsyncIterable<unknown[][]>; expected: Promise<number> };
-  produce(
-    params: { format: 'xlsx' | 'csv'; bom: boolean; filters: { from?: string; to?: string } },
-    run: {
-      actor: BenchActor;
-      filePath: string;
-      progress: (percent: number) => Promise<void>;
-      xlsxRowsPerSheet: number;
-    },
-  ): Promise<{ rows: number; sheets: number }>;
-}
+/** The compiled producer's methods the bench calls, typed by the API's own source. */
+type ReceiptsProducerLike = Pick<ReceiptsExportProducer, 'rows' | 'produce'>;
 
 /** Rows of the job's own output the floors cycle through: same shapes, same bytes per row. */
 const SAMPLE_ROWS = 10_000;

@@ -23,8 +23,12 @@ function driverOf(transaction: Transaction): Connection {
  * DECIMAL and SUM() results as text (the readers use Number()), dates as the SQL formats them.
  */
 export async function selectRows(transaction: Transaction, query: SqlQuery): Promise<Row[]> {
+  return rowsOn(driverOf(transaction), query);
+}
+
+function rowsOn(connection: Connection, query: SqlQuery): Promise<Row[]> {
   // typeCast undefined: the driver's own decoders instead of Sequelize's hook.
-  return driverOf(transaction).query<Row[]>(
+  return connection.query<Row[]>(
     { sql: query.sql, namedPlaceholders: true, typeCast: undefined },
     query.replacements,
   );
@@ -38,10 +42,7 @@ export async function pooledRows(sequelize: Sequelize, query: SqlQuery): Promise
   const manager = sequelize.connectionManager;
   const connection = (await manager.getConnection({ type: 'read' })) as Connection;
   try {
-    return await connection.query<Row[]>(
-      { sql: query.sql, namedPlaceholders: true, typeCast: undefined },
-      query.replacements,
-    );
+    return await rowsOn(connection, query);
   } finally {
     manager.releaseConnection(connection);
   }

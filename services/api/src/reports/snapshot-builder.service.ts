@@ -55,6 +55,7 @@ const UPSERT_SNAPSHOT_SQL = `INSERT INTO report_snapshots (scope, scope_id, peri
     as_of = VALUES(as_of)`;
 
 type Progress = (percent: number) => Promise<unknown>;
+type Row = Record<string, unknown>;
 
 /** A region and the months its chapters are active in, first to last ('YYYY-MM'; null if none). */
 interface RegionSpan {
@@ -70,7 +71,6 @@ const REGION_SPANS_SQL: SqlQuery = {
          GROUP BY g.id`,
   replacements: { monthFormat: '%Y-%m', openEnd: '9999-12-31' },
 };
-type Row = Record<string, unknown>;
 
 /**
  * Builds the stored report snapshots (regions and the network) and campaign snapshots from
@@ -100,9 +100,7 @@ export class SnapshotBuilder {
       // Reads side by side on pooled connections, outside the write transaction: the lock keeps
       // every other rebuild out, and each statement sees what was committed when it began.
       const [inRegion, { fiscalYearStartMonth }] = await Promise.all([
-        this.pooled(chaptersSql({ regionOfChapterId: chapterId })).then((rows) =>
-          rows.map(chapterInfoFromRow),
-        ),
+        this.pooledChapters({ regionOfChapterId: chapterId }),
         this.settings.current(),
       ]);
       const chapter = inRegion.find((each) => each.chapterId === chapterId);
@@ -112,12 +110,8 @@ export class SnapshotBuilder {
       const range = monthRangeOf(targets)!;
       const chapterIds = inRegion.map((each) => each.chapterId);
       const [statuses, monthFlows, stored, campaignIds] = await Promise.all([
-        this.pooled(tallyStatusSql({ chapterIds, ...range })).then((rows) =>
-          rows.map(tallyStatusFromRow),
-        ),
-        this.pooled(regionMonthFlowsSql({ chapterIds, from: month, to: month })).then((rows) =>
-          rows.map(regionMonthFlowsFromRow),
-        ),
+        this.pooledStatuses({ chapterIds, ...range }),
+        this.pooledFlows({ chapterIds, from: month, to: month }),
         this.storedRegionRows(periods, chapter.regionId, range),
         this.pooled(campaignsOfChapterMonthSql(chapterId, month)).then((rows) =>
           rows.map((row) => Number(row.campaign_id)),
@@ -198,10 +192,8 @@ export class SnapshotBuilder {
     if (unbuilt.length === 0) return others;
     const wanted = new Set(unbuilt);
     const fromFacts = (
-      await this.pooled(regionMonthFlowsSql({ chapterIds, from: unbuilt[0], to: unbuilt.at(-1)! }))
-    )
-      .map(regionMonthFlowsFromRow)
-      .filter((row) => wanted.has(row.month));
+      await this.pooledFlows({ chapterIds, from: unbuilt[0], to: unbuilt.at(-1)! })
+    ).filter((row) => wanted.has(row.month));
     return [...others, ...fromFacts];
   }
 
@@ -211,21 +203,22 @@ export class SnapshotBuilder {
     today: string,
   ): Promise<BuiltSnapshot[]> {
     const regionIds = [...new Set(targets.map((target) => target.scopeId))];
-    const chapters = (await this.pooled(chaptersSql({ regionIds }))).map(chapterInfoFromRow);
+    const chapters = await this.pooledChapters({ regionIds });
     const filter = {
       ...monthRangeOf(targets)!,
       chapterIds: chapters.map((each) => each.chapterId),
     };
     const [flows, statuses] = await Promise.all([
-      this.pooled(regionMonthFlowsSql(filter)).then((rows) => rows.map(regionMonthFlowsFromRow)),
-      this.pooled(tallyStatusSql(filter)).then((rows) => rows.map(tallyStatusFromRow)),
+      this.pooledFlows(filter),
+      this.pooledStatuses(filter),
     ]);
     return rollUpSnapshots({ flows, chapters, statuses, today }, targets);
   }
 
   /**
-   * Every region with its chapters' active months, and stored rows: the other regions' rows of these periods (for the
-   * network), and one region's month rows in `range` as flows (stock is read from the statuses).
+   * Every region with its chapters' active months, and stored rows: the other regions' rows of
+   * these periods (for the network), and one region's month rows in `range` as flows (stock is
+   * read from the statuses).
    */
   private async storedRegionRows(
     periods: Period[],
@@ -343,19 +336,6 @@ export class SnapshotBuilder {
   }
 
   /**
-   * Regions and the network need no chapter's flows: the database sums them per region and
-   * month (a few rows per region and month, so Sequelize's reading costs nothing here).
-   */
-  private async regionFlows(filter: FactsFilter): Promise<MonthFlows[]> {
-    const query = regionMonthFlowsSql(filter);
-    const rows = await this.sequelize.query<Record<string, unknown>>(query.sql, {
-      type: QueryTypes.SELECT,
-      replacements: query.replacements,
-    });
-    return rows.map(regionMonthFlowsFromRow);
-  }
-
-  /**
    * Every region's flows, summed by the database in parts of the chapters on connections of
    * their own, side by side: one GROUP BY runs on one core, and a region's rows from two parts
    * simply add up in the roll-up.
@@ -366,7 +346,7 @@ export class SnapshotBuilder {
     const parts = Array.from({ length: FLOW_READ_PARTS }, (_, index) =>
       ids.slice(index * size, (index + 1) * size),
     ).filter((part) => part.length > 0);
-    return (await Promise.all(parts.map((chapterIds) => this.regionFlows({ chapterIds })))).flat();
+    return (await Promise.all(parts.map((chapterIds) => this.pooledFlows({ chapterIds })))).flat();
   }
 
   private async statuses(filter: FactsFilter, transaction: Transaction): Promise<TallyStatus[]> {
@@ -482,6 +462,19 @@ export class SnapshotBuilder {
 
   private pooled(query: SqlQuery): Promise<Row[]> {
     return pooledRows(this.sequelize, query);
+  }
+
+  /** Flows summed per region and month (a few rows per region and month), on a pooled connection. */
+  private async pooledFlows(filter: FactsFilter): Promise<MonthFlows[]> {
+    return (await this.pooled(regionMonthFlowsSql(filter))).map(regionMonthFlowsFromRow);
+  }
+
+  private async pooledChapters(filter: ChapterInfoFilter): Promise<ChapterInfo[]> {
+    return (await this.pooled(chaptersSql(filter))).map(chapterInfoFromRow);
+  }
+
+  private async pooledStatuses(filter: FactsFilter): Promise<TallyStatus[]> {
+    return (await this.pooled(tallyStatusSql(filter))).map(tallyStatusFromRow);
   }
 
   /**

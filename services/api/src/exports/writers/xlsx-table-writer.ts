@@ -101,9 +101,7 @@ interface ZipInternals {
 }
 interface SheetStreamInternals {
   stream?: {
-    pipes?: Array<
-      NodeJS.EventEmitter & { _writableState?: { needDrain?: boolean; length?: number } }
-    >;
+    pipes?: Array<NodeJS.EventEmitter & { _writableState?: { length?: number } }>;
   };
 }
 
@@ -126,8 +124,8 @@ async function zipCaughtUp(
 ): Promise<void> {
   const intake = (worksheet as unknown as SheetStreamInternals).stream?.pipes?.[0];
   const zip = (workbook as unknown as ZipInternals).zip;
-  const backlog = intake?._writableState?.length ?? 0;
-  if (!intake?._writableState?.needDrain || !zip || backlog < ZIP_BACKLOG_BYTES) {
+  // Far past the intake's high-water mark, so a 'drain' is owed when it empties.
+  if (!intake || !zip || (intake._writableState?.length ?? 0) < ZIP_BACKLOG_BYTES) {
     await nextTurn();
     return;
   }
