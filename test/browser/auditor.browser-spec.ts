@@ -85,6 +85,12 @@ describe('auditor: trace a figure to a scan, then sample receipts and conclude',
     const [scanTab] = await Promise.all([page.context().waitForEvent('page'), scan.click()]);
     await scanTab.waitForLoadState();
     expect(scanTab.url()).toMatch(/^blob:/);
+    // A blob tab shows the bare image; wait until it has been decoded before capturing it.
+    await scanTab.bringToFront();
+    await scanTab.waitForFunction(() => {
+      const image = document.querySelector('img');
+      return image !== null && image.complete && image.naturalWidth > 0;
+    });
     await screenshot(scanTab, 'auditor-4-scan');
     await scanTab.close();
 

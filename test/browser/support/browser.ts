@@ -55,9 +55,24 @@ export async function openWatchedPage(browser: Browser, baseUrl: string): Promis
   return { context, page, problems };
 }
 
+/**
+ * Saves a full-page screenshot for people to look at. Chromium now and then refuses a capture
+ * of a tab it has not painted yet (a freshly opened one, a machine under load), so the tab is
+ * brought to the front and the capture tried again before the test is failed.
+ */
 export async function screenshot(page: Page, name: string): Promise<string> {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
   const path = join(SCREENSHOT_DIR, `${name}.png`);
-  await page.screenshot({ path, fullPage: true });
-  return path;
+  const attempts = 3;
+  for (let attempt = 1; ; attempt += 1) {
+    try {
+      await page.screenshot({ path, fullPage: true });
+      return path;
+    } catch (error) {
+      const refused = error instanceof Error && /Unable to capture screenshot/.test(error.message);
+      if (!refused || attempt === attempts) throw error;
+      await page.bringToFront();
+      await page.waitForTimeout(250 * attempt);
+    }
+  }
 }
