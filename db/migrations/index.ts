@@ -10,6 +10,7 @@ import { createAuditSamples } from './20261202-0008-create-audit-samples';
 import { chainAuditLog } from './20261203-0009-chain-audit-log';
 import { createFindings } from './20261203-0010-create-findings';
 import { liveChapterFigures } from './20261203-0012-live-chapter-figures';
+import { snapshotSourcesByReference } from './20261204-0013-snapshot-sources-by-reference';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
 export const MIGRATIONS: Migration[] = [
@@ -24,4 +25,5 @@ export const MIGRATIONS: Migration[] = [
   chainAuditLog,
   createFindings,
   liveChapterFigures,
+  snapshotSourcesByReference,
 ];

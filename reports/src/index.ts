@@ -5,6 +5,7 @@ export * from './chapter-month-facts';
 export * from './campaign-credit';
 export * from './tally-status';
 export * from './tally-snapshot-rollup';
+export * from './snapshot-sources';
 export * from './impact-agency-kinds';
 export * from './impact-gaps';
 export * from './impact-methodology';

@@ -1,6 +1,7 @@
 import {
   addSnapshotFigures,
   emptySnapshotFigures,
+  monthPeriod,
   quarterPeriod,
   type SnapshotFigures,
 } from '@tallyloom/core';
@@ -89,9 +90,34 @@ describe('rollUpSnapshots', () => {
   });
 
   it('gives empty figures to a scope with nothing approved', () => {
-    const [region2] = rollUp(input, [{ scope: 'region', scopeId: 2, period: q1 }]);
+    const [region2, region2January] = rollUp(input, [
+      { scope: 'region', scopeId: 2, period: q1 },
+      { scope: 'region', scopeId: 2, period: monthPeriod('2026-01') },
+    ]);
     expect(region2.figures).toEqual(emptySnapshotFigures());
-    expect(region2.sourceRevisions).toEqual([]);
+    expect(region2January.sourceRevisions).toEqual([]);
+  });
+
+  it("lists source revisions on a region's months and a chapter's periods, and nowhere else", () => {
+    const built = rollUp(input, [
+      { scope: 'region', scopeId: 1, period: monthPeriod('2026-01') },
+      { scope: 'region', scopeId: 1, period: monthPeriod('2026-03') },
+      { scope: 'region', scopeId: 1, period: q1 },
+      { scope: 'network', scopeId: 0, period: monthPeriod('2026-01') },
+      { scope: 'network', scopeId: 0, period: q1 },
+      { scope: 'chapter', scopeId: 1, period: q1 },
+    ]);
+    expect(built.map((snapshot) => snapshot.sourceRevisions)).toEqual([
+      [[11, 1]],
+      [[21, 1]],
+      null,
+      null,
+      null,
+      [
+        [11, 1],
+        [12, 1],
+      ],
+    ]);
   });
 });
 

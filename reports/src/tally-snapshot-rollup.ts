@@ -22,6 +22,7 @@ import {
   type SnapshotScope,
 } from '@tallyloom/core';
 import type { ChapterMonthFact, MonthFlows } from './chapter-month-facts';
+import { namesOwnSources, type SourceRevision } from './snapshot-sources';
 
 export interface ChapterInfo {
   chapterId: number;
@@ -61,8 +62,11 @@ export interface BuiltSnapshot extends SnapshotTarget {
   figures: SnapshotFigures;
   compliance: ComplianceFigures;
   pendingTallies: number;
-  /** [tallyId, revision] of every approved revision in the figures, sorted. */
-  sourceRevisions: Array<[number, number]>;
+  /**
+   * [tallyId, revision] of every approved revision in the figures, sorted; null for a snapshot
+   * that adds up region months and names its revisions through them (see `namesOwnSources`).
+   */
+  sourceRevisions: SourceRevision[] | null;
 }
 
 /**
@@ -145,7 +149,7 @@ export function inputFromFacts(input: {
 interface StatusBucket {
   compliance: ComplianceFigures;
   pendingTallies: number;
-  sources: Array<[number, number]>;
+  sources: SourceRevision[];
 }
 
 const targetKey = (target: SnapshotTarget) =>
@@ -200,6 +204,8 @@ export class SnapshotRollup {
   private readonly periodsOfMonth = new Map<MonthKey, Period[]>();
   /** The scopes anyone asked for. */
   private readonly wantedScopes = new Set<string>();
+  /** The scopes with a target that lists its own source revisions. */
+  private readonly sourcedScopes = new Set<string>();
   /** Flows by scope and month, added to the targets in `snapshots()`. */
   private readonly flowBuckets = new Map<string, Map<MonthKey, SnapshotFigures>>();
   /** A reporting status depends only on these, and a full rebuild asks per chapter-month. */
@@ -220,10 +226,11 @@ export class SnapshotRollup {
         figures: emptySnapshotFigures(),
         compliance: emptyCompliance(),
         pendingTallies: 0,
-        sourceRevisions: [],
+        sourceRevisions: namesOwnSources(target) ? [] : null,
       };
       this.built.set(key, snapshot);
       this.wantedScopes.add(scopeKey(target.scope, target.scopeId));
+      if (snapshot.sourceRevisions) this.sourcedScopes.add(scopeKey(target.scope, target.scopeId));
       let scopes = byPeriod.get(periodId(target.period));
       if (!scopes) {
         scopes = new Map();
@@ -266,7 +273,7 @@ export class SnapshotRollup {
       entryOf(months, month, () => ({
         compliance: emptyCompliance(),
         pendingTallies: 0,
-        sources: [] as Array<[number, number]>,
+        sources: [] as SourceRevision[],
       }));
     const months = [...this.periodsOfMonth.keys()];
     const statusesOf = groupBy(statuses, (status) => status.chapterId);
@@ -278,6 +285,7 @@ export class SnapshotRollup {
       ].filter((scope) => this.wantedScopes.has(scope));
       if (scopes.length === 0) continue;
       const monthBuckets = scopes.map(bucketsOf);
+      const sourcedBuckets = scopes.filter((scope) => this.sourcedScopes.has(scope)).map(bucketsOf);
 
       const submittedAt = new Map<MonthKey, string | null>();
       const lastApprovedIn = new Map<Period, { month: MonthKey; approved: ApprovedRevision }>();
@@ -290,8 +298,10 @@ export class SnapshotRollup {
         }
         const { approved } = status;
         if (!approved) continue;
-        for (const inScope of monthBuckets) {
-          bucketIn(inScope, status.month).sources.push([approved.tallyId, approved.revision]);
+        if (sourcedBuckets.length > 0) {
+          const source: SourceRevision = [approved.tallyId, approved.revision];
+          for (const inScope of sourcedBuckets)
+            bucketIn(inScope, status.month).sources.push(source);
         }
         for (const period of periods) {
           const last = lastApprovedIn.get(period);
@@ -329,15 +339,16 @@ export class SnapshotRollup {
     for (const snapshot of this.built.values()) {
       const inScope = buckets.get(scopeKey(snapshot.scope, snapshot.scopeId));
       if (!inScope) continue;
+      const sources = snapshot.sourceRevisions;
       for (const month of monthsOf(snapshot.period)) {
         const bucket = inScope.get(month);
         if (!bucket) continue;
         snapshot.compliance = addCompliance(snapshot.compliance, bucket.compliance);
         snapshot.pendingTallies += bucket.pendingTallies;
-        for (const source of bucket.sources) snapshot.sourceRevisions.push(source);
+        if (sources) for (const source of bucket.sources) sources.push(source);
       }
       // A snapshot counts one revision per tally, so the tally id alone orders them.
-      snapshot.sourceRevisions.sort((a, b) => a[0] - b[0]);
+      sources?.sort((a, b) => a[0] - b[0]);
     }
   }
 
@@ -371,7 +382,7 @@ export class SnapshotRollup {
 /** A stored or freshly built region snapshot, as far as the network needs it. */
 export type RegionPart = Pick<
   BuiltSnapshot,
-  'scopeId' | 'figures' | 'compliance' | 'pendingTallies' | 'sourceRevisions'
+  'scopeId' | 'figures' | 'compliance' | 'pendingTallies'
 >;
 
 /**
@@ -383,14 +394,11 @@ export function networkFromRegions(period: Period, regions: readonly RegionPart[
   let figures = emptySnapshotFigures();
   let compliance = emptyCompliance();
   let pendingTallies = 0;
-  const sources: Array<[number, number]> = [];
   for (const region of regions) {
     figures = addSnapshotFigures(figures, region.figures);
     compliance = addCompliance(compliance, region.compliance);
     pendingTallies += region.pendingTallies;
-    sources.push(...region.sourceRevisions);
   }
-  sources.sort((a, b) => a[0] - b[0] || a[1] - b[1]);
   return {
     scope: 'network',
     scopeId: 0,
@@ -398,7 +406,8 @@ export function networkFromRegions(period: Period, regions: readonly RegionPart[
     figures,
     compliance,
     pendingTallies,
-    sourceRevisions: sources,
+    // Its regions' months name them.
+    sourceRevisions: null,
   };
 }
 

@@ -135,8 +135,7 @@ describe('auth: sign-in, tokens, refresh and passwords', () => {
     it('answers a wrong password and an unknown e-mail alike, and spends a bcrypt comparison on both', async () => {
       const person = await aUser().build(testApp.app);
       const unknown = `nobody.${uniqueSuffix().toLowerCase()}@test.example`;
-      const attempt = (email: string) =>
-        postSignIn({ email, password: 'not-the-password-at-all' });
+      const attempt = (email: string) => postSignIn({ email, password: 'not-the-password-at-all' });
       const wrong = await attempt(person.email);
       const missing = await attempt(unknown);
       expect(wrong.status).toBe(401);

@@ -165,6 +165,17 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
     const { checked, problems, chapterIds } = checkScopes(world, stored, regionIds);
     expect(problems).toEqual([]);
     expect(missingRows(world, stored, chapterIds)).toEqual([]);
+    // Each revision is listed once, on its region's month; every other stored row names its
+    // revisions through the region months it adds up (and the check above re-added those).
+    const mineStored = checked.filter((row) => row.scope !== 'chapter');
+    expect(
+      mineStored.filter(
+        (row) => row.listsOwnSources !== (row.scope === 'region' && row.periodKind === 'month'),
+      ),
+    ).toEqual([]);
+    expect(mineStored.some((row) => !row.listsOwnSources && row.sourceRevisions.length > 0)).toBe(
+      true,
+    );
     // Two years of demo history: the check covered real figures, not empty rows.
     expect(checked.filter((row) => Number(row.figures.approvedTallies) > 0).length).toBeGreaterThan(
       300,
@@ -317,6 +328,17 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
     const { checked, problems, chapterIds } = checkScopes(world, stored, regionIds);
     expect(problems).toEqual([]);
     expect(missingRows(world, stored, chapterIds)).toEqual([]);
+    // Each revision is listed once, on its region's month; every other stored row names its
+    // revisions through the region months it adds up (and the check above re-added those).
+    const mineStored = checked.filter((row) => row.scope !== 'chapter');
+    expect(
+      mineStored.filter(
+        (row) => row.listsOwnSources !== (row.scope === 'region' && row.periodKind === 'month'),
+      ),
+    ).toEqual([]);
+    expect(mineStored.some((row) => !row.listsOwnSources && row.sourceRevisions.length > 0)).toBe(
+      true,
+    );
     expect(checked.length).toBeGreaterThan(20);
     expect(checkNetwork(world, stored, chapterIds)).toEqual([]);
   });

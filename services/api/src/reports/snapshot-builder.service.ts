@@ -76,7 +76,8 @@ const REGION_SPANS_SQL: SqlQuery = {
  * Builds the stored report snapshots (regions and the network) and campaign snapshots from
  * approved tallies: reads the flows summed per region and month and one status row per tally,
  * rolls them up with the report definition, and upserts each snapshot (recompute, never
- * increment) with its as-of time and the revisions it was built from.
+ * increment) with its as-of time and the revisions it was built from (listed on region months,
+ * named through them by every row that adds them up: see `namesOwnSources`).
  */
 @Injectable()
 export class SnapshotBuilder {
@@ -242,8 +243,7 @@ export class SnapshotBuilder {
     const [regions, rows] = await Promise.all([
       this.pooled(REGION_SPANS_SQL),
       this.pooled({
-        sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies,
-                     source_revisions
+        sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies
                 FROM report_snapshots
                WHERE scope = 'region' AND (
                      (scope_id <> :regionId AND (${wanted.join(' OR ')}))
@@ -271,7 +271,6 @@ export class SnapshotBuilder {
         figures: jsonColumn(row.figures),
         compliance: jsonColumn(row.compliance),
         pendingTallies: Number(row.pending_tallies),
-        sourceRevisions: jsonColumn(row.source_revisions),
       });
     }
     return {
@@ -378,7 +377,7 @@ export class SnapshotBuilder {
         JSON.stringify(snapshot.figures),
         JSON.stringify(snapshot.compliance),
         snapshot.pendingTallies,
-        JSON.stringify(snapshot.sourceRevisions),
+        snapshot.sourceRevisions && JSON.stringify(snapshot.sourceRevisions),
         asOfText,
       ];
     };

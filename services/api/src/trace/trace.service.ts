@@ -9,6 +9,8 @@ import {
   type TraceReceipt,
   type TraceView,
 } from '@tallyloom/core';
+import { mergeSources, sourcesOfStoredSql, type SourceRevision } from '@tallyloom/reports';
+import { QueryTypes } from 'sequelize';
 import type { Actor } from '../common/access/actor';
 import { jsonColumn } from '../common/sql/column-values';
 import { ChapterFigures } from '../reports/chapter-figures.service';
@@ -87,13 +89,14 @@ export class TraceService {
   private async snapshotOf(
     subject: { scope: SnapshotScope; scopeId: number | null; scopeName: string },
     period: Period,
-  ): Promise<{ figures: SnapshotFigures; sourceRevisions: Array<[number, number]>; asOf: string }> {
+  ): Promise<{ figures: SnapshotFigures; sourceRevisions: SourceRevision[]; asOf: string }> {
     if (subject.scope === 'chapter') {
       const [built] = await this.chapters.build([subject.scopeId!], [period]);
       if (built) {
         return {
           figures: built.figures,
-          sourceRevisions: built.sourceRevisions,
+          // A chapter's snapshot always lists its own.
+          sourceRevisions: built.sourceRevisions ?? [],
           asOf: new Date().toISOString(),
         };
       }
@@ -107,15 +110,35 @@ export class TraceService {
         },
       });
       if (stored) {
+        const own = jsonColumn<SourceRevision[] | null>(stored.sourceRevisions);
         return {
           figures: jsonColumn<SnapshotFigures>(stored.figures),
-          sourceRevisions: jsonColumn<Array<[number, number]>>(stored.sourceRevisions),
+          sourceRevisions: own ?? (await this.sourcesThroughMonths(subject, period)),
           asOf: stored.asOf.toISOString(),
         };
       }
     }
     throw new NotFoundException(
       `No report snapshot of ${subject.scopeName} for ${period.label} has been built.`,
+    );
+  }
+
+  /**
+   * The revisions of a stored row that adds up region months, as those months list them. They
+   * are written in the same transaction as the row, so they name exactly what it counted.
+   */
+  private async sourcesThroughMonths(
+    subject: { scope: SnapshotScope; scopeId: number | null },
+    period: Period,
+  ): Promise<SourceRevision[]> {
+    const scope = subject.scope === 'network' ? 'network' : 'region';
+    const query = sourcesOfStoredSql(scope, subject.scopeId ?? 0, period);
+    const rows = await this.snapshots.sequelize!.query<{ source_revisions: unknown }>(query.sql, {
+      type: QueryTypes.SELECT,
+      replacements: query.replacements,
+    });
+    return mergeSources(
+      rows.map((row) => jsonColumn<SourceRevision[] | null>(row.source_revisions) ?? []),
     );
   }
 }

@@ -39,9 +39,12 @@ export class ReportSnapshot extends Model {
   @Column({ type: DataType.INTEGER.UNSIGNED, allowNull: false })
   declare pendingTallies: number;
 
-  /** [[tallyId, revision], …] */
-  @Column({ type: DataType.JSON, allowNull: false })
-  declare sourceRevisions: Array<[number, number]>;
+  /**
+   * [[tallyId, revision], …] on a region's month; null on the rows that add up region months
+   * and name their revisions through them (see `namesOwnSources`).
+   */
+  @Column({ type: DataType.JSON, allowNull: true })
+  declare sourceRevisions: Array<[number, number]> | null;
 
   @Column({ type: DataType.DATE(3), allowNull: false })
   declare asOf: Date;
