@@ -6,6 +6,7 @@ export * from './campaign-credit';
 export * from './tally-status';
 export * from './tally-snapshot-rollup';
 export * from './snapshot-sources';
+export * from './stored-targets';
 export * from './impact-agency-kinds';
 export * from './impact-gaps';
 export * from './impact-methodology';

@@ -15,9 +15,13 @@ import {
   monthsOf,
   periodsContaining,
   reportingStatus,
+  submissionStatus,
+  tallyDueOn,
+  utcDateOf,
   type ComplianceFigures,
   type MonthKey,
   type Period,
+  type ReportingStatus,
   type SnapshotFigures,
   type SnapshotScope,
 } from '@tallyloom/core';
@@ -198,18 +202,23 @@ export function rollUpSnapshots(
 export class SnapshotRollup {
   private readonly currentMonth: MonthKey;
   private readonly built = new Map<string, BuiltSnapshot>();
-  /** Targets by the Period object itself, for the per-chapter loops (no key to build). */
-  private readonly scopesOfPeriod = new Map<Period, Map<string, BuiltSnapshot>>();
-  /** The periods each month falls in. */
-  private readonly periodsOfMonth = new Map<MonthKey, Period[]>();
-  /** The scopes anyone asked for. */
-  private readonly wantedScopes = new Set<string>();
+  /**
+   * The months any target covers, and their positions: the per-chapter loops of a full rebuild
+   * (tens of thousands of chapter-months) index arrays by position instead of keying maps.
+   */
+  private readonly months: MonthKey[] = [];
+  private readonly monthIndex = new Map<MonthKey, number>();
+  /** The distinct periods asked for, each with the positions of its months, in month order. */
+  private readonly periodMonths: number[][] = [];
+  private readonly periodIndex = new Map<string, number>();
+  /** Each scope's snapshots by period position. */
+  private readonly snapshotsOfScope = new Map<string, Array<BuiltSnapshot | undefined>>();
   /** The scopes with a target that lists its own source revisions. */
   private readonly sourcedScopes = new Set<string>();
   /** Flows by scope and month, added to the targets in `snapshots()`. */
   private readonly flowBuckets = new Map<string, Map<MonthKey, SnapshotFigures>>();
-  /** A reporting status depends only on these, and a full rebuild asks per chapter-month. */
-  private readonly statusMemo = new Map<string, ReturnType<typeof reportingStatus>>();
+  /** Each month's due date and status when never submitted, per due day. */
+  private readonly dueMemo = new Map<MonthKey, Map<number, MonthDue>>();
 
   constructor(
     targets: readonly SnapshotTarget[],
@@ -217,7 +226,6 @@ export class SnapshotRollup {
     private readonly today: string,
   ) {
     this.currentMonth = today.slice(0, 7);
-    const byPeriod = new Map<string, Map<string, BuiltSnapshot>>();
     for (const target of targets) {
       const key = targetKey(target);
       if (this.built.has(key)) continue;
@@ -229,19 +237,26 @@ export class SnapshotRollup {
         sourceRevisions: namesOwnSources(target) ? [] : null,
       };
       this.built.set(key, snapshot);
-      this.wantedScopes.add(scopeKey(target.scope, target.scopeId));
-      if (snapshot.sourceRevisions) this.sourcedScopes.add(scopeKey(target.scope, target.scopeId));
-      let scopes = byPeriod.get(periodId(target.period));
-      if (!scopes) {
-        scopes = new Map();
-        byPeriod.set(periodId(target.period), scopes);
-        this.scopesOfPeriod.set(target.period, scopes);
-        for (const month of monthsOf(target.period)) {
-          entryOf(this.periodsOfMonth, month, () => []).push(target.period);
-        }
-      }
-      scopes.set(scopeKey(target.scope, target.scopeId), snapshot);
+      const scope = scopeKey(target.scope, target.scopeId);
+      entryOf(this.snapshotsOfScope, scope, () => [])[this.indexOfPeriod(target.period)] = snapshot;
+      if (snapshot.sourceRevisions) this.sourcedScopes.add(scope);
     }
+  }
+
+  /** The position of a period, its months registered the first time it is seen. */
+  private indexOfPeriod(period: Period): number {
+    const id = periodId(period);
+    let index = this.periodIndex.get(id);
+    if (index === undefined) {
+      index = this.periodMonths.length;
+      this.periodIndex.set(id, index);
+      this.periodMonths.push(
+        monthsOf(period).map((month) =>
+          entryOf(this.monthIndex, month, () => this.months.push(month) - 1),
+        ),
+      );
+    }
+    return index;
   }
 
   /**
@@ -250,11 +265,11 @@ export class SnapshotRollup {
    */
   addFlows(flows: readonly MonthFlows[]): void {
     for (const row of flows) {
-      if (!this.periodsOfMonth.has(row.month)) continue;
+      if (!this.monthIndex.has(row.month)) continue;
       const covered = [scopeKey('region', row.regionId), scopeKey('network', 0)];
       if (row.chapterId !== null) covered.push(scopeKey('chapter', row.chapterId));
       for (const scope of covered) {
-        if (!this.wantedScopes.has(scope)) continue;
+        if (!this.snapshotsOfScope.has(scope)) continue;
         const months = entryOf(this.flowBuckets, scope, () => new Map<MonthKey, SnapshotFigures>());
         addFlowsInPlace(entryOf(months, row.month, emptySnapshotFigures), row.figures);
       }
@@ -266,55 +281,51 @@ export class SnapshotRollup {
    * added to the targets at once: month buckets per scope first, then each target's months.
    */
   addStatuses(chapters: readonly ChapterInfo[], statuses: readonly TallyStatus[]): void {
-    const buckets = new Map<string, Map<MonthKey, StatusBucket>>();
-    const bucketsOf = (scope: string) =>
-      entryOf(buckets, scope, () => new Map<MonthKey, StatusBucket>());
-    const bucketIn = (months: Map<MonthKey, StatusBucket>, month: MonthKey) =>
-      entryOf(months, month, () => ({
-        compliance: emptyCompliance(),
-        pendingTallies: 0,
-        sources: [] as SourceRevision[],
-      }));
-    const months = [...this.periodsOfMonth.keys()];
+    const { months, monthIndex, periodMonths } = this;
+    const buckets = new Map<string, Array<StatusBucket | undefined>>();
+    const bucketsOf = (scope: string) => entryOf(buckets, scope, () => []);
+    const bucketAt = (inScope: Array<StatusBucket | undefined>, index: number) =>
+      (inScope[index] ??= { compliance: emptyCompliance(), pendingTallies: 0, sources: [] });
     const statusesOf = groupBy(statuses, (status) => status.chapterId);
     for (const chapter of chapters) {
       const scopes = [
         scopeKey('chapter', chapter.chapterId),
         scopeKey('region', chapter.regionId),
         scopeKey('network', 0),
-      ].filter((scope) => this.wantedScopes.has(scope));
+      ].filter((scope) => this.snapshotsOfScope.has(scope));
       if (scopes.length === 0) continue;
       const monthBuckets = scopes.map(bucketsOf);
       const sourcedBuckets = scopes.filter((scope) => this.sourcedScopes.has(scope)).map(bucketsOf);
 
-      const submittedAt = new Map<MonthKey, string | null>();
-      const lastApprovedIn = new Map<Period, { month: MonthKey; approved: ApprovedRevision }>();
+      // The chapter's tallies by month position: first submission, and the approved revision.
+      const submittedAt = new Array<string | null | undefined>(months.length);
+      const approvedAt = new Array<ApprovedRevision | undefined>(months.length);
       for (const status of statusesOf.get(chapter.chapterId) ?? []) {
-        submittedAt.set(status.month, status.firstSubmittedAt);
-        const periods = this.periodsOfMonth.get(status.month);
-        if (!periods) continue;
+        const index = monthIndex.get(status.month);
+        if (index === undefined) continue;
+        submittedAt[index] = status.firstSubmittedAt;
         if (status.pending) {
-          for (const inScope of monthBuckets) bucketIn(inScope, status.month).pendingTallies += 1;
+          for (const inScope of monthBuckets) bucketAt(inScope, index).pendingTallies += 1;
         }
         const { approved } = status;
         if (!approved) continue;
+        approvedAt[index] = approved;
         if (sourcedBuckets.length > 0) {
           const source: SourceRevision = [approved.tallyId, approved.revision];
-          for (const inScope of sourcedBuckets)
-            bucketIn(inScope, status.month).sources.push(source);
-        }
-        for (const period of periods) {
-          const last = lastApprovedIn.get(period);
-          if (!last || last.month < status.month) {
-            lastApprovedIn.set(period, { month: status.month, approved });
-          }
+          for (const inScope of sourcedBuckets) bucketAt(inScope, index).sources.push(source);
         }
       }
       // Stock is a level: the chapter's closing stock of its last approved month in each period.
-      for (const [period, { approved }] of lastApprovedIn) {
-        const inPeriod = this.scopesOfPeriod.get(period)!;
-        for (const scope of scopes) {
-          const snapshot = inPeriod.get(scope);
+      const snapshotsOf = scopes.map((scope) => this.snapshotsOfScope.get(scope)!);
+      for (let period = 0; period < periodMonths.length; period += 1) {
+        const inPeriod = periodMonths[period];
+        let approved: ApprovedRevision | undefined;
+        for (let at = inPeriod.length - 1; at >= 0 && !approved; at -= 1) {
+          approved = approvedAt[inPeriod[at]];
+        }
+        if (!approved) continue;
+        for (const inScope of snapshotsOf) {
+          const snapshot = inScope[period];
           if (!snapshot) continue;
           snapshot.figures.panelsInStock += approved.panelsClosing;
           snapshot.figures.blanketsInStock += approved.blanketsClosing;
@@ -324,31 +335,34 @@ export class SnapshotRollup {
       const activeFrom = chapter.activeFrom.slice(0, 7);
       const activeTo = chapter.activeTo?.slice(0, 7) ?? this.currentMonth;
       const lastExpected = activeTo < this.currentMonth ? activeTo : this.currentMonth;
-      for (const month of months) {
+      for (let index = 0; index < months.length; index += 1) {
+        const month = months[index];
         if (month < activeFrom || month > lastExpected) continue;
         const field =
-          COMPLIANCE_FIELD[this.statusOf(month, chapter.dueDay, submittedAt.get(month) ?? null)];
+          COMPLIANCE_FIELD[this.statusOf(month, chapter.dueDay, submittedAt[index] ?? null)];
         for (const inScope of monthBuckets) {
-          const { compliance } = bucketIn(inScope, month);
+          const { compliance } = bucketAt(inScope, index);
           compliance.expected += 1;
           compliance[field] += 1;
         }
       }
     }
 
-    for (const snapshot of this.built.values()) {
-      const inScope = buckets.get(scopeKey(snapshot.scope, snapshot.scopeId));
-      if (!inScope) continue;
-      const sources = snapshot.sourceRevisions;
-      for (const month of monthsOf(snapshot.period)) {
-        const bucket = inScope.get(month);
-        if (!bucket) continue;
-        snapshot.compliance = addCompliance(snapshot.compliance, bucket.compliance);
-        snapshot.pendingTallies += bucket.pendingTallies;
-        if (sources) for (const source of bucket.sources) sources.push(source);
-      }
-      // A snapshot counts one revision per tally, so the tally id alone orders them.
-      sources?.sort((a, b) => a[0] - b[0]);
+    for (const [scope, inScope] of buckets) {
+      const snapshots = this.snapshotsOfScope.get(scope)!;
+      snapshots.forEach((snapshot, period) => {
+        if (!snapshot) return;
+        const sources = snapshot.sourceRevisions;
+        for (const index of periodMonths[period]) {
+          const bucket = inScope[index];
+          if (!bucket) continue;
+          snapshot.compliance = addCompliance(snapshot.compliance, bucket.compliance);
+          snapshot.pendingTallies += bucket.pendingTallies;
+          if (sources) for (const source of bucket.sources) sources.push(source);
+        }
+        // A snapshot counts one revision per tally, so the tally id alone orders them.
+        sources?.sort((a, b) => a[0] - b[0]);
+      });
     }
   }
 
@@ -366,17 +380,30 @@ export class SnapshotRollup {
     return [...this.built.values()];
   }
 
-  private statusOf(month: MonthKey, dueDay: number, submittedAt: string | null) {
-    // The status reads only the UTC day of the submission, so a UTC timestamp's date is its key.
-    const submittedOn = submittedAt?.endsWith('Z') ? submittedAt.slice(0, 10) : submittedAt;
-    const key = `${month}|${dueDay}|${submittedOn ?? ''}`;
-    let status = this.statusMemo.get(key);
-    if (status === undefined) {
-      status = reportingStatus({ month, dueDay, firstSubmittedAt: submittedAt, today: this.today });
-      this.statusMemo.set(key, status);
-    }
-    return status;
+  /**
+   * The reporting status of a chapter-month (see core's `reportingStatus`), with the due date
+   * and the never-submitted status worked out once per month and due day: a full rebuild asks
+   * for every chapter-month of the network.
+   */
+  private statusOf(month: MonthKey, dueDay: number, submittedAt: string | null): ReportingStatus {
+    const byDueDay = entryOf(this.dueMemo, month, () => new Map<number, MonthDue>());
+    const due = entryOf(byDueDay, dueDay, () => ({
+      dueOn: tallyDueOn(month, dueDay),
+      unsubmitted: reportingStatus({ month, dueDay, firstSubmittedAt: null, today: this.today }),
+    }));
+    if (submittedAt === null) return due.unsubmitted;
+    // A UTC timestamp's first ten characters are its UTC date.
+    const submittedOn = submittedAt.endsWith('Z')
+      ? submittedAt.slice(0, 10)
+      : utcDateOf(submittedAt, 'firstSubmittedAt');
+    return submissionStatus(submittedOn, due.dueOn);
   }
+}
+
+/** A month's due date for one due day, and its status should nothing be submitted. */
+interface MonthDue {
+  dueOn: string;
+  unsubmitted: ReportingStatus;
 }
 
 /** A stored or freshly built region snapshot, as far as the network needs it. */

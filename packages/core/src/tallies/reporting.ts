@@ -34,7 +34,7 @@ export interface ReportingStatusInput {
 export function reportingStatus(input: ReportingStatusInput): ReportingStatus {
   const dueOn = tallyDueOn(input.month, input.dueDay);
   if (input.firstSubmittedAt !== null && input.firstSubmittedAt !== undefined) {
-    return utcDateOf(input.firstSubmittedAt, 'firstSubmittedAt') <= dueOn ? 'on-time' : 'late';
+    return submissionStatus(utcDateOf(input.firstSubmittedAt, 'firstSubmittedAt'), dueOn);
   }
   if (!isIsoDate(input.today)) {
     throw new DomainError(
@@ -45,4 +45,12 @@ export function reportingStatus(input: ReportingStatusInput): ReportingStatus {
   // A month can only be reported once it is over.
   if (input.today < monthStart(addMonths(input.month, 1))) return 'upcoming';
   return input.today <= dueOn ? 'due' : 'missing';
+}
+
+/**
+ * A submitted month's status from the UTC date of its first submission and its due date (both
+ * 'YYYY-MM-DD'): on time up to and including the due day.
+ */
+export function submissionStatus(submittedOn: string, dueOn: string): 'on-time' | 'late' {
+  return submittedOn <= dueOn ? 'on-time' : 'late';
 }

@@ -7,17 +7,16 @@ import {
   campaignCreditSql,
   campaignsOfChapterMonthSql,
   chaptersSql,
-  expectedChapterMonths,
   monthRangeOf,
   networkFromRegions,
   regionMonthFlowsFromRow,
   regionMonthFlowsSql,
   rollUpSnapshots,
   SnapshotRollup,
+  storedTargetsOf,
   STORED_SCOPES,
   tallyStatusSql,
   targetsOfChapterMonth,
-  targetsOfMonths,
   type BuiltCampaignSnapshot,
   type BuiltSnapshot,
   type ChapterInfo,
@@ -305,15 +304,14 @@ export class SnapshotBuilder {
           null,
         );
         const today = new Date().toISOString().slice(0, 10);
-        const expected = firstMonth
-          ? expectedChapterMonths(chapters, firstMonth, today.slice(0, 7))
+        const targets = firstMonth
+          ? storedTargetsOf(
+              chapters,
+              statuses,
+              { from: firstMonth, to: today.slice(0, 7) },
+              fiscalYearStartMonth,
+            )
           : [];
-        const targets = targetsOfMonths(
-          chapters,
-          [...statuses, ...expected],
-          fiscalYearStartMonth,
-          STORED_SCOPES,
-        );
         const rollup = new SnapshotRollup(targets, today);
         rollup.addStatuses(chapters, statuses);
         await progress(10);
