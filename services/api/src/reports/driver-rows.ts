@@ -48,6 +48,21 @@ export async function pooledRows(sequelize: Sequelize, query: SqlQuery): Promise
   }
 }
 
+/** One statement that returns no rows, in autocommit, on a connection of Sequelize's pool. */
+export async function pooledExecute(
+  sequelize: Sequelize,
+  sql: string,
+  values: unknown[],
+): Promise<void> {
+  const manager = sequelize.connectionManager;
+  const connection = (await manager.getConnection({ type: 'write' })) as Connection;
+  try {
+    await connection.query(sql, values);
+  } finally {
+    manager.releaseConnection(connection);
+  }
+}
+
 /** Runs one statement for many rows of values in the driver's bulk protocol. */
 export async function batchRows(
   transaction: Transaction,

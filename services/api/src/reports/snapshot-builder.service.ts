@@ -36,7 +36,7 @@ import { isoDate, jsonColumn, orNull } from '../common/sql/column-values';
 import { SettingsService } from '../settings/settings.service';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
 import type { RebuildSummary } from './report-jobs';
-import { batchRows, pooledRows, selectRows } from './driver-rows';
+import { batchRows, pooledExecute, pooledRows, selectRows } from './driver-rows';
 import { chapterInfoFromRow, tallyStatusFromRow } from './snapshot-inputs';
 
 // One rebuild at a time across every worker: two jobs touching the same region would otherwise
@@ -45,13 +45,37 @@ const LOCK_NAME = 'tallyloom:report-snapshots';
 const LOCK_WAIT_SECONDS = 120;
 const WRITE_CHUNK = 250;
 const FLOW_READ_PARTS = 2;
-const UPSERT_SNAPSHOT_SQL = `INSERT INTO report_snapshots (scope, scope_id, period_kind, period_key,
-    period_from, period_to, figures, compliance, pending_tallies, source_revisions, as_of)
-  VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+/** The upsert of `rows` snapshots, each with the values of `snapshotValues`. */
+const upsertSnapshotsSql = (rows: number) => `INSERT INTO report_snapshots (scope, scope_id,
+    period_kind, period_key, period_from, period_to, figures, compliance, pending_tallies,
+    source_revisions, as_of)
+  VALUES ${Array.from({ length: rows }, () => '(?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)').join(', ')}
   ON DUPLICATE KEY UPDATE period_from = VALUES(period_from), period_to = VALUES(period_to),
     figures = VALUES(figures), compliance = VALUES(compliance),
     pending_tallies = VALUES(pending_tallies), source_revisions = VALUES(source_revisions),
     as_of = VALUES(as_of)`;
+const UPSERT_SNAPSHOT_SQL = upsertSnapshotsSql(1);
+
+/** As UTC text: the driver would send a Date in the process's time zone. */
+const sqlTimestamp = (at: Date) => at.toISOString().slice(0, 23).replace('T', ' ');
+
+/** One snapshot's values in the column order of `upsertSnapshotsSql`. */
+function snapshotValues(snapshot: BuiltSnapshot, asOfText: string): unknown[] {
+  const { fromDate, toDate } = periodDates(snapshot.period);
+  return [
+    snapshot.scope,
+    snapshot.scopeId,
+    snapshot.period.kind,
+    snapshot.period.key,
+    fromDate,
+    toDate,
+    JSON.stringify(snapshot.figures),
+    JSON.stringify(snapshot.compliance),
+    snapshot.pendingTallies,
+    snapshot.sourceRevisions && JSON.stringify(snapshot.sourceRevisions),
+    asOfText,
+  ];
+}
 
 type Progress = (percent: number) => Promise<unknown>;
 type Row = Record<string, unknown>;
@@ -98,7 +122,12 @@ export class SnapshotBuilder {
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async () => {
       // Reads side by side on pooled connections, outside the write transaction: the lock keeps
-      // every other rebuild out, and each statement sees what was committed when it began.
+      // every other rebuild out, and each statement sees what was committed when it began. Those
+      // that need neither the region nor the fiscal year start at once.
+      const spansRead = this.pooled(REGION_SPANS_SQL);
+      const campaignsRead = this.pooled(campaignsOfChapterMonthSql(chapterId, month));
+      // Awaited below; this only keeps a failure meanwhile from going unhandled.
+      for (const read of [spansRead, campaignsRead]) read.catch(() => undefined);
       const [inRegion, { fiscalYearStartMonth }] = await Promise.all([
         this.pooledChapters({ regionOfChapterId: chapterId }),
         this.settings.current(),
@@ -112,10 +141,8 @@ export class SnapshotBuilder {
       const [statuses, monthFlows, stored, campaignIds] = await Promise.all([
         this.pooledStatuses({ chapterIds, ...range }),
         this.pooledFlows({ chapterIds, from: month, to: month }),
-        this.storedRegionRows(periods, chapter.regionId, range),
-        this.pooled(campaignsOfChapterMonthSql(chapterId, month)).then((rows) =>
-          rows.map((row) => Number(row.campaign_id)),
-        ),
+        this.storedRegionRows(periods, chapter.regionId, range, spansRead),
+        campaignsRead.then((rows) => rows.map((row) => Number(row.campaign_id))),
       ]);
       const today = new Date().toISOString().slice(0, 10);
       const flows = [
@@ -162,9 +189,14 @@ export class SnapshotBuilder {
         ];
         built.push(networkFromRegions(period, regions));
       }
+      const asOf = new Date();
+      if (campaignIds.length === 0) {
+        // One statement is atomic on its own: no transaction, and two round trips fewer.
+        await this.upsertInOneStatement(built, asOf);
+        return { snapshots: built.length, campaigns: 0 };
+      }
       // Writes only: the default isolation does, and one statement fewer.
       return this.sequelize.transaction(async (transaction) => {
-        const asOf = new Date();
         await this.writeSnapshots(built, asOf, transaction);
         const campaigns = await this.rebuildCampaigns(campaignIds, asOf, transaction);
         return { snapshots: built.length, campaigns };
@@ -224,6 +256,7 @@ export class SnapshotBuilder {
     periods: Period[],
     regionId: number,
     range: { from: MonthKey; to: MonthKey },
+    spansRead: Promise<Row[]>,
   ): Promise<{
     regions: RegionSpan[];
     otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>;
@@ -240,7 +273,7 @@ export class SnapshotBuilder {
       return `(period_kind = :kind${index} AND period_key = :key${index})`;
     });
     const [regions, rows] = await Promise.all([
-      this.pooled(REGION_SPANS_SQL),
+      spansRead,
       this.pooled({
         sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies
                 FROM report_snapshots
@@ -361,24 +394,8 @@ export class SnapshotBuilder {
     transaction: Transaction,
     progress: (done: number) => Promise<unknown> = () => Promise.resolve(),
   ): Promise<void> {
-    // As UTC text: the driver's bulk protocol would send a Date in the process's time zone.
-    const asOfText = asOf.toISOString().slice(0, 23).replace('T', ' ');
-    const valuesOf = (snapshot: BuiltSnapshot) => {
-      const { fromDate, toDate } = periodDates(snapshot.period);
-      return [
-        snapshot.scope,
-        snapshot.scopeId,
-        snapshot.period.kind,
-        snapshot.period.key,
-        fromDate,
-        toDate,
-        JSON.stringify(snapshot.figures),
-        JSON.stringify(snapshot.compliance),
-        snapshot.pendingTallies,
-        snapshot.sourceRevisions && JSON.stringify(snapshot.sourceRevisions),
-        asOfText,
-      ];
-    };
+    const asOfText = sqlTimestamp(asOf);
+    const valuesOf = (snapshot: BuiltSnapshot) => snapshotValues(snapshot, asOfText);
     // The next chunk's JSON is written while the server stores the one before (one statement
     // at a time on the connection, but the two processes work side by side).
     let writing: Promise<void> | null = null;
@@ -392,6 +409,17 @@ export class SnapshotBuilder {
     }
     if (writing) await writing;
     await progress(built.length);
+  }
+
+  /** A few snapshots upserted by one multi-row statement on a pooled connection. */
+  private async upsertInOneStatement(built: BuiltSnapshot[], asOf: Date): Promise<void> {
+    if (built.length === 0) return;
+    const asOfText = sqlTimestamp(asOf);
+    await pooledExecute(
+      this.sequelize,
+      upsertSnapshotsSql(built.length),
+      built.flatMap((snapshot) => snapshotValues(snapshot, asOfText)),
+    );
   }
 
   private async rebuildCampaigns(
