@@ -72,6 +72,20 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
     return { checked: mine, problems, chapterIds };
   }
 
+  /**
+   * Each revision is listed once, on its region's month; every other stored row names its
+   * revisions through the region months it adds up (and `checkScopes` re-added those).
+   */
+  function expectSourcesListedOnRegionMonthsOnly(checked: StoredSnapshot[]) {
+    const stored = checked.filter((row) => row.scope !== 'chapter');
+    expect(
+      stored.filter(
+        (row) => row.listsOwnSources !== (row.scope === 'region' && row.periodKind === 'month'),
+      ),
+    ).toEqual([]);
+    expect(stored.some((row) => !row.listsOwnSources && row.sourceRevisions.length > 0)).toBe(true);
+  }
+
   /** The scope × period keys the watched chapters' tallies call for: 'scope:id:periodKey'. */
   function wantedKeys(world: World, chapterIds: Set<number>): Set<string> {
     const regionOf = new Map(world.chapters.map((c) => [c.id, c.regionId]));
@@ -165,17 +179,7 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
     const { checked, problems, chapterIds } = checkScopes(world, stored, regionIds);
     expect(problems).toEqual([]);
     expect(missingRows(world, stored, chapterIds)).toEqual([]);
-    // Each revision is listed once, on its region's month; every other stored row names its
-    // revisions through the region months it adds up (and the check above re-added those).
-    const mineStored = checked.filter((row) => row.scope !== 'chapter');
-    expect(
-      mineStored.filter(
-        (row) => row.listsOwnSources !== (row.scope === 'region' && row.periodKind === 'month'),
-      ),
-    ).toEqual([]);
-    expect(mineStored.some((row) => !row.listsOwnSources && row.sourceRevisions.length > 0)).toBe(
-      true,
-    );
+    expectSourcesListedOnRegionMonthsOnly(checked);
     // Two years of demo history: the check covered real figures, not empty rows.
     expect(checked.filter((row) => Number(row.figures.approvedTallies) > 0).length).toBeGreaterThan(
       300,
@@ -328,17 +332,7 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
     const { checked, problems, chapterIds } = checkScopes(world, stored, regionIds);
     expect(problems).toEqual([]);
     expect(missingRows(world, stored, chapterIds)).toEqual([]);
-    // Each revision is listed once, on its region's month; every other stored row names its
-    // revisions through the region months it adds up (and the check above re-added those).
-    const mineStored = checked.filter((row) => row.scope !== 'chapter');
-    expect(
-      mineStored.filter(
-        (row) => row.listsOwnSources !== (row.scope === 'region' && row.periodKind === 'month'),
-      ),
-    ).toEqual([]);
-    expect(mineStored.some((row) => !row.listsOwnSources && row.sourceRevisions.length > 0)).toBe(
-      true,
-    );
+    expectSourcesListedOnRegionMonthsOnly(checked);
     expect(checked.length).toBeGreaterThan(20);
     expect(checkNetwork(world, stored, chapterIds)).toEqual([]);
   });
