@@ -11,7 +11,8 @@ import {
   type Period,
   type SnapshotScope,
 } from '@tallyloom/core';
-import type { ChapterInfo, SnapshotTarget } from './tally-snapshot-rollup';
+import { entryOf } from './map-entry';
+import { targetKey, type ChapterInfo, type SnapshotTarget } from './tally-snapshot-rollup';
 
 /** Months from `from` to `to` as one run ('YYYY-MM', both inclusive). */
 interface MonthRun {
@@ -47,14 +48,7 @@ export function storedTargetsOf(
 ): SnapshotTarget[] {
   const regionOf = new Map(chapters.map((chapter) => [chapter.chapterId, chapter.regionId]));
   const monthsOfRegion = new Map<number, Set<MonthKey>>();
-  const monthsIn = (regionId: number) => {
-    let months = monthsOfRegion.get(regionId);
-    if (!months) {
-      months = new Set();
-      monthsOfRegion.set(regionId, months);
-    }
-    return months;
-  };
+  const monthsIn = (regionId: number) => entryOf(monthsOfRegion, regionId, () => new Set());
   for (const { chapterId, month } of tallied) {
     const regionId = regionOf.get(chapterId);
     if (regionId !== undefined) monthsIn(regionId).add(month);
@@ -68,9 +62,7 @@ export function storedTargetsOf(
       to: activeTo < range.to ? activeTo : range.to,
     };
     if (run.from > run.to) continue;
-    const runs = runsOfRegion.get(chapter.regionId) ?? [];
-    runs.push(run);
-    runsOfRegion.set(chapter.regionId, runs);
+    entryOf(runsOfRegion, chapter.regionId, () => []).push(run);
   }
   for (const [regionId, runs] of runsOfRegion) {
     const months = monthsIn(regionId);
@@ -82,13 +74,12 @@ export function storedTargetsOf(
   const targets = new Map<string, SnapshotTarget>();
   const add = (scope: SnapshotScope, scopeId: number, months: Iterable<MonthKey>) => {
     for (const month of months) {
-      let periods = periodsOf.get(month);
-      if (!periods) {
-        periods = periodsContaining(month, fiscalYearStartMonth);
-        periodsOf.set(month, periods);
-      }
+      const periods = entryOf(periodsOf, month, () =>
+        periodsContaining(month, fiscalYearStartMonth),
+      );
       for (const period of periods) {
-        targets.set(`${scope}:${scopeId}:${period.kind}:${period.key}`, { scope, scopeId, period });
+        const target = { scope, scopeId, period };
+        targets.set(targetKey(target), target);
       }
     }
   };

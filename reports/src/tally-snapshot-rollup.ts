@@ -26,6 +26,7 @@ import {
   type SnapshotScope,
 } from '@tallyloom/core';
 import type { ChapterMonthFact, MonthFlows } from './chapter-month-facts';
+import { entryOf } from './map-entry';
 import { namesOwnSources, type SourceRevision } from './snapshot-sources';
 
 export interface ChapterInfo {
@@ -156,20 +157,11 @@ interface StatusBucket {
   sources: SourceRevision[];
 }
 
-const targetKey = (target: SnapshotTarget) =>
+/** 'scope:id:kind:key', one per snapshot. */
+export const targetKey = (target: SnapshotTarget) =>
   `${target.scope}:${target.scopeId}:${target.period.kind}:${target.period.key}`;
 const periodId = (period: Pick<Period, 'kind' | 'key'>) => `${period.kind}:${period.key}`;
 const scopeKey = (scope: SnapshotScope, id: number) => `${scope}:${id}`;
-
-/** The value of `key`, made and stored first when the map has none. */
-function entryOf<K, V>(map: Map<K, V>, key: K, make: () => V): V {
-  let value = map.get(key);
-  if (value === undefined) {
-    value = make();
-    map.set(key, value);
-  }
-  return value;
-}
 
 function groupBy<T>(items: readonly T[], keyOf: (item: T) => number): Map<number, T[]> {
   const groups = new Map<number, T[]>();
