@@ -11,6 +11,7 @@ import { chainAuditLog } from './20261203-0009-chain-audit-log';
 import { createFindings } from './20261203-0010-create-findings';
 import { liveChapterFigures } from './20261203-0012-live-chapter-figures';
 import { snapshotSourcesByReference } from './20261204-0013-snapshot-sources-by-reference';
+import { approvedMonthIndex } from './20261205-0014-approved-month-index';
 
 /** Every migration, oldest first. Listed by hand so source and compiled builds share one order. */
 export const MIGRATIONS: Migration[] = [
@@ -26,4 +27,5 @@ export const MIGRATIONS: Migration[] = [
   createFindings,
   liveChapterFigures,
   snapshotSourcesByReference,
+  approvedMonthIndex,
 ];

@@ -7,6 +7,7 @@ export * from './tally-status';
 export * from './tally-snapshot-rollup';
 export * from './snapshot-sources';
 export * from './stored-targets';
+export * from './sum-of-parts';
 export * from './impact-agency-kinds';
 export * from './impact-gaps';
 export * from './impact-methodology';

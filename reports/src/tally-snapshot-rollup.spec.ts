@@ -6,8 +6,8 @@ import {
   type SnapshotFigures,
 } from '@tallyloom/core';
 import type { ChapterMonthFact, MonthFlows } from './chapter-month-facts';
+import { networkFromRegions, regionPeriodFromMonths } from './sum-of-parts';
 import {
-  networkFromRegions,
   expectedChapterMonths,
   inputFromFacts,
   rollUpSnapshots,
@@ -316,5 +316,81 @@ describe('networkFromRegions', () => {
       );
       expect(networkFromRegions(network.period, regions)).toEqual(network);
     }
+  });
+});
+
+describe('regionPeriodFromMonths', () => {
+  it("equals the region's quarter and fiscal year rolled up from every chapter, given its months and stock", () => {
+    // Fiscal years from July: FY2026 is 2025-07..2026-06, and the example's months all fall in it.
+    const targets = targetsOfMonths(
+      chapters,
+      [
+        ...facts.map(({ chapterId, month }) => ({ chapterId, month })),
+        ...expectedChapterMonths(chapters, '2025-07', '2026-05'),
+      ],
+      7,
+      ['region'],
+    );
+    const built = rollUp(input, targets);
+    const longer = built.filter((snapshot) => snapshot.period.kind !== 'month');
+    expect(longer.map((snapshot) => `${snapshot.scopeId}:${snapshot.period.key}`)).toEqual(
+      expect.arrayContaining(['1:2026-Q1', '1:FY2026', '2:2026-Q1', '2:FY2026']),
+    );
+    for (const period of longer) {
+      const months = built
+        .filter((each) => each.scopeId === period.scopeId && each.period.kind === 'month')
+        .map((each) => ({ ...each, month: each.period.key }));
+      // Stock by hand: each of the region's chapters' closing in its last approved month.
+      const lastClosing = (chapterId: number) =>
+        facts
+          .filter((f) => f.chapterId === chapterId)
+          .filter((f) => f.month >= period.period.from && f.month <= period.period.to)
+          .sort((a, b) => a.month.localeCompare(b.month))
+          .at(-1)?.figures.panelsInStock ?? 0;
+      const panels = chapters
+        .filter((chapter) => chapter.regionId === period.scopeId)
+        .reduce((sum, chapter) => sum + lastClosing(chapter.chapterId), 0);
+      expect(regionPeriodFromMonths(period, months, { panels, blankets: 0 })).toEqual(period);
+    }
+    // Region 1's first quarter: chapter 1's February closing (8) and chapter 2's March (100).
+    expect(built.find((s) => s.scopeId === 1 && s.period.key === '2026-Q1')!.figures).toMatchObject(
+      {
+        panelsInStock: 108,
+        panelsAccepted: 31,
+      },
+    );
+  });
+
+  it('ignores months outside the period and refuses a month or a wider scope', () => {
+    const quarter = { scope: 'region' as const, scopeId: 1, period: q1 };
+    const part = (month: string, panelsAccepted: number) => ({
+      month,
+      figures: { ...emptySnapshotFigures(), panelsAccepted },
+      compliance: { expected: 1, onTime: 1, late: 0, missing: 0, open: 0 },
+      pendingTallies: 1,
+    });
+    const sum = regionPeriodFromMonths(
+      quarter,
+      [part('2025-12', 1000), part('2026-01', 3), part('2026-03', 4), part('2026-04', 1000)],
+      { panels: 7, blankets: 2 },
+    );
+    expect(sum.figures).toMatchObject({ panelsAccepted: 7, panelsInStock: 7, blanketsInStock: 2 });
+    expect([sum.compliance.expected, sum.pendingTallies, sum.sourceRevisions]).toEqual([
+      2,
+      2,
+      null,
+    ]);
+    expect(() =>
+      regionPeriodFromMonths({ ...quarter, period: monthPeriod('2026-01') }, [], {
+        panels: 0,
+        blankets: 0,
+      }),
+    ).toThrow(/quarter or fiscal year/);
+    expect(() =>
+      regionPeriodFromMonths({ ...quarter, scope: 'network', scopeId: 0 }, [], {
+        panels: 0,
+        blankets: 0,
+      }),
+    ).toThrow(/quarter or fiscal year/);
   });
 });

@@ -8,7 +8,6 @@ import {
   COMPLIANCE_FIELD,
   addCompliance,
   addFlowsInPlace,
-  addSnapshotFigures,
   emptyCompliance,
   emptySnapshotFigures,
   monthsBetween,
@@ -396,38 +395,6 @@ export class SnapshotRollup {
 interface MonthDue {
   dueOn: string;
   unsubmitted: ReportingStatus;
-}
-
-/** A stored or freshly built region snapshot, as far as the network needs it. */
-export type RegionPart = Pick<
-  BuiltSnapshot,
-  'scopeId' | 'figures' | 'compliance' | 'pendingTallies'
->;
-
-/**
- * The network for one period as the sum of its regions (every chapter is in exactly one region,
- * and every measure adds across scopes), so a change in one region needs only that region's
- * facts and the other regions' stored rows, not every chapter of the network.
- */
-export function networkFromRegions(period: Period, regions: readonly RegionPart[]): BuiltSnapshot {
-  let figures = emptySnapshotFigures();
-  let compliance = emptyCompliance();
-  let pendingTallies = 0;
-  for (const region of regions) {
-    figures = addSnapshotFigures(figures, region.figures);
-    compliance = addCompliance(compliance, region.compliance);
-    pendingTallies += region.pendingTallies;
-  }
-  return {
-    scope: 'network',
-    scopeId: 0,
-    period,
-    figures,
-    compliance,
-    pendingTallies,
-    // Its regions' months name them.
-    sourceRevisions: null,
-  };
 }
 
 /** The target of `scope` that holds the chapter (the network has id 0). */

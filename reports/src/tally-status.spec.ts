@@ -1,4 +1,4 @@
-import { chaptersSql, tallyStatusSql } from './tally-status';
+import { chaptersSql, periodStockSql, periodStocksFromRows, tallyStatusSql } from './tally-status';
 
 describe('chaptersSql', () => {
   it('reads every chapter without a filter', () => {
@@ -38,5 +38,46 @@ describe('tallyStatusSql', () => {
       'LEFT JOIN tally_revisions r ON r.tally_id = t.id AND r.revision = t.approved_revision',
     );
     expect(sql.match(/JOIN/g)).toHaveLength(1);
+  });
+});
+
+describe('periodStockSql', () => {
+  it("takes each chapter's last approved month per period, one window per period", () => {
+    const { sql, replacements } = periodStockSql({
+      chapterIds: [3, 4],
+      periods: [
+        { from: '2026-01', to: '2026-03' },
+        { from: '2025-07', to: '2026-06' },
+      ],
+    });
+    expect(
+      sql.match(/ROW_NUMBER\(\) OVER \(PARTITION BY t.chapter_id ORDER BY t.month DESC\)/g),
+    ).toHaveLength(2);
+    expect(sql).toContain('WHERE l.nth = 1');
+    expect(replacements).toMatchObject({
+      chapterIds: [3, 4],
+      from0: '2026-01-01',
+      to0: '2026-03-01',
+      from1: '2025-07-01',
+      to1: '2026-06-01',
+    });
+  });
+
+  it('matches nothing for no chapters, and refuses a month that is not YYYY-MM', () => {
+    expect(
+      periodStockSql({ chapterIds: [], periods: [{ from: '2026-01', to: '2026-03' }] }).sql,
+    ).toContain('WHERE 1 = 0');
+    expect(() =>
+      periodStockSql({ chapterIds: [1], periods: [{ from: '2026-1', to: '2026-03' }] }),
+    ).toThrow(/periods\[0\]\.from/);
+  });
+
+  it('reads one stock per period, nothing where no row came back', () => {
+    expect(
+      periodStocksFromRows([{ period_index: 1, panels_closing: '12', blankets_closing: '3' }], 2),
+    ).toEqual([
+      { panels: 0, blankets: 0 },
+      { panels: 12, blankets: 3 },
+    ]);
   });
 });

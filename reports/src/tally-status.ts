@@ -2,6 +2,7 @@
  * What the snapshot shows beside its figures: which chapter-months were expected, which were
  * filed when (compliance), and which are pending (filed but not approved, see TALLY_SNAPSHOT).
  */
+import type { Period } from '@tallyloom/core';
 import { monthStartDate, requireIds, type SqlQuery } from './sql';
 import { PENDING_TALLY_CONDITION } from './tally-snapshot';
 
@@ -96,4 +97,68 @@ export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
     ].join('\n'),
     replacements,
   };
+}
+
+/** One period's stock: the sum of each chapter's closing stocks of its last approved month. */
+export interface PeriodStock {
+  panels: number;
+  blankets: number;
+}
+
+/**
+ * The stock of each period for these chapters, summed by the database: each chapter's closing
+ * stocks of its last approved month in the period (what `SnapshotRollup` adds from statuses).
+ * One row per period with an approved tally: period_index (the position in `periods`),
+ * panels_closing, blankets_closing. An incremental rebuild asks it for a quarter and a fiscal
+ * year instead of reading every tally of the year: the index on (chapter, month, approved
+ * revision) answers the window without touching the tallies themselves.
+ */
+export function periodStockSql(filter: {
+  chapterIds: readonly number[];
+  periods: ReadonlyArray<Pick<Period, 'from' | 'to'>>;
+}): SqlQuery {
+  const ids = requireIds('chapterIds', filter.chapterIds);
+  if (ids.length === 0 || filter.periods.length === 0) {
+    return {
+      sql: 'SELECT 0 AS period_index, 0 AS panels_closing, 0 AS blankets_closing FROM DUAL WHERE 1 = 0',
+      replacements: {},
+    };
+  }
+  const replacements: Record<string, unknown> = { chapterIds: ids };
+  const lasts = filter.periods.map((period, index) => {
+    replacements[`from${index}`] = monthStartDate(`periods[${index}].from`, period.from);
+    replacements[`to${index}`] = monthStartDate(`periods[${index}].to`, period.to);
+    return [
+      `SELECT ${index} AS period_index, t.id, t.approved_revision,`,
+      '  ROW_NUMBER() OVER (PARTITION BY t.chapter_id ORDER BY t.month DESC) AS nth',
+      'FROM monthly_tallies t',
+      `WHERE t.chapter_id IN (:chapterIds) AND t.month BETWEEN :from${index} AND :to${index}`,
+      '  AND t.approved_revision IS NOT NULL',
+    ].join('\n');
+  });
+  return {
+    sql: [
+      'SELECT l.period_index, SUM(r.panels_closing) AS panels_closing,',
+      '  SUM(r.blankets_closing) AS blankets_closing',
+      `FROM (${lasts.join('\nUNION ALL\n')}) l`,
+      'JOIN tally_revisions r ON r.tally_id = l.id AND r.revision = l.approved_revision',
+      'WHERE l.nth = 1',
+      'GROUP BY l.period_index',
+    ].join('\n'),
+    replacements,
+  };
+}
+
+/** Reads the rows of `periodStockSql`: one stock per period, in the order asked (0 without rows). */
+export function periodStocksFromRows(
+  rows: ReadonlyArray<Record<string, unknown>>,
+  periods: number,
+): PeriodStock[] {
+  const stocks = Array.from({ length: periods }, () => ({ panels: 0, blankets: 0 }));
+  for (const row of rows) {
+    const stock = stocks[Number(row.period_index)];
+    stock.panels = Number(row.panels_closing);
+    stock.blankets = Number(row.blankets_closing);
+  }
+  return stocks;
 }

@@ -335,5 +335,138 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
     expectSourcesListedOnRegionMonthsOnly(checked);
     expect(checked.length).toBeGreaterThan(20);
     expect(checkNetwork(world, stored, chapterIds)).toEqual([]);
+
+    // Then a few changes, each followed by the job's incremental rebuild of its chapter-month:
+    // the region's month from its tallies, its quarter and fiscal year from its months and
+    // each period's stock, the network from the regions. One region month row is dropped
+    // first, as if it had never been built: the rebuilds must roll it up from its tallies.
+    const changes = await changeTallies(random, regionIds);
+    expect(changes.length).toBeGreaterThan(2);
+    const [dropped] = changes;
+    const droppedMonth = monthBefore(dropped.month);
+    await sequelize.query(
+      `DELETE FROM report_snapshots
+        WHERE scope = 'region' AND scope_id = :regionId AND period_kind = 'month'
+          AND period_key = :month`,
+      { replacements: { regionId: dropped.regionId, month: droppedMonth } },
+    );
+    for (const change of changes)
+      await builder.rebuildForChapterMonth(change.chapterId, change.month);
+    const changedWorld = await readWorld(testApp.app);
+    const afterChanges = await withChapters(
+      await storedSnapshots(testApp.app),
+      changedWorld,
+      regionIds,
+    );
+    // Every figure, stock, compliance and pending count equals a recompute. Only the rows that
+    // add up the dropped month cannot name its revisions yet: they name them through it.
+    const withoutDropped = checkScopes(changedWorld, afterChanges, regionIds).problems.filter(
+      (problem) =>
+        !problem.startsWith(`region:${dropped.regionId} `) || !problem.endsWith(' sources differ'),
+    );
+    expect(withoutDropped).toEqual([]);
+    // The changes reached the rows: an incremental rebuild wrote each changed month's region row.
+    for (const change of changes) {
+      const row = afterChanges.find(
+        (each) =>
+          each.scope === 'region' &&
+          each.scopeId === change.regionId &&
+          each.periodKey === change.month,
+      );
+      expect(row?.asOf.getTime()).toBeGreaterThanOrEqual(change.at.getTime());
+    }
+    // The dropped month is built again by its own job; then every row names its revisions.
+    await builder.rebuildForChapterMonth(dropped.chapterId, droppedMonth);
+    const rebuilt = await withChapters(await storedSnapshots(testApp.app), changedWorld, regionIds);
+    expect(checkScopes(changedWorld, rebuilt, regionIds).problems).toEqual([]);
+    expect(missingRows(changedWorld, rebuilt, chapterIds)).toEqual([]);
+    expect(checkNetwork(changedWorld, rebuilt, chapterIds)).toEqual([]);
   });
+
+  /** 'YYYY-MM' of the month before. */
+  function monthBefore(month: string): string {
+    const [year, number] = month.split('-').map(Number);
+    return number === 1 ? `${year - 1}-12` : `${year}-${String(number - 1).padStart(2, '0')}`;
+  }
+
+  /**
+   * Changes a few tallies of the regions as the tally workflow would leave them: an approved
+   * revision's counts and closing stock corrected, a submitted tally approved, a draft filed.
+   * The first change is in a month after the chapter's first, so the month before it exists.
+   */
+  async function changeTallies(
+    random: ReturnType<typeof seeded>,
+    regionIds: number[],
+  ): Promise<Array<{ chapterId: number; regionId: number; month: string; at: Date }>> {
+    const tallies = await sequelize.query<{
+      id: number;
+      chapter_id: number;
+      region_id: number;
+      month: string;
+      state: string;
+      current_revision: number;
+      approved_revision: number | null;
+    }>(
+      `SELECT t.id, t.chapter_id, c.region_id, DATE_FORMAT(t.month, '%Y-%m') AS month, t.state,
+              t.current_revision, t.approved_revision
+         FROM monthly_tallies t JOIN chapters c ON c.id = t.chapter_id
+        WHERE c.region_id IN (:regionIds) AND t.month > '2016-01-01'
+        ORDER BY t.id`,
+      { type: QueryTypes.SELECT, replacements: { regionIds } },
+    );
+    const pick = (state: string, approved: boolean) => {
+      const matching = tallies.filter(
+        (t) => t.state === state && (t.approved_revision !== null) === approved,
+      );
+      return matching.length === 0 ? [] : [matching[random.int(0, matching.length - 1)]];
+    };
+    const update = (sql: string, replacements: Record<string, unknown>) =>
+      sequelize.query(sql, { type: QueryTypes.UPDATE, replacements });
+    const changes = [];
+    for (const tally of [...pick('approved', true), ...pick('approved', true)]) {
+      await update(
+        `UPDATE tally_revisions SET panels_accepted = :panels, panels_closing = :closing,
+                blankets_closing = :blankets
+          WHERE tally_id = :id AND revision = :revision`,
+        {
+          id: tally.id,
+          revision: tally.approved_revision,
+          panels: random.int(0, 400),
+          closing: random.int(1000, 1900),
+          blankets: random.int(50, 90),
+        },
+      );
+      changes.push(tally);
+    }
+    for (const tally of pick('submitted', false)) {
+      await update(
+        `UPDATE monthly_tallies SET state = 'approved', approved_revision = current_revision
+          WHERE id = :id`,
+        { id: tally.id },
+      );
+      await update(
+        `UPDATE tally_revisions SET state = 'approved' WHERE tally_id = :id AND revision = :revision`,
+        { id: tally.id, revision: tally.current_revision },
+      );
+      changes.push(tally);
+    }
+    for (const tally of pick('draft', false)) {
+      await update(
+        `UPDATE monthly_tallies SET state = 'submitted', first_submitted_at = :at WHERE id = :id`,
+        { id: tally.id, at: new Date(`${tally.month}-20T08:00:00Z`) },
+      );
+      await update(
+        `UPDATE tally_revisions SET state = 'submitted' WHERE tally_id = :id AND revision = :revision`,
+        { id: tally.id, revision: tally.current_revision },
+      );
+      changes.push(tally);
+    }
+    const at = new Date(Date.now() - 1000);
+    return changes.map((tally) => ({
+      chapterId: tally.chapter_id,
+      regionId: tally.region_id,
+      month: tally.month,
+      at,
+    }));
+  }
 });

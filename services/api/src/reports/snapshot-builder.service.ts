@@ -1,6 +1,12 @@
 import { Injectable } from '@nestjs/common';
 import { InjectConnection, InjectModel } from '@nestjs/sequelize';
-import { monthsBetween, periodDates, type MonthKey, type Period } from '@tallyloom/core';
+import {
+  monthPeriod,
+  monthsBetween,
+  periodDates,
+  type MonthKey,
+  type Period,
+} from '@tallyloom/core';
 import {
   buildCampaignSnapshot,
   campaignCreditFromRow,
@@ -9,8 +15,11 @@ import {
   chaptersSql,
   monthRangeOf,
   networkFromRegions,
+  periodStockSql,
+  periodStocksFromRows,
   regionMonthFlowsFromRow,
   regionMonthFlowsSql,
+  regionPeriodFromMonths,
   rollUpSnapshots,
   SnapshotRollup,
   storedTargetsOf,
@@ -23,6 +32,8 @@ import {
   type ChapterInfoFilter,
   type FactsFilter,
   type MonthFlows,
+  type MonthPart,
+  type PeriodStock,
   type RegionPart,
   type SnapshotTarget,
   type SqlQuery,
@@ -87,6 +98,13 @@ interface RegionSpan {
   lastMonth: MonthKey | null;
 }
 
+/** What `storedRegionRows` reads for an incremental rebuild. */
+interface StoredRegionRows {
+  regions: RegionSpan[];
+  otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>;
+  ownMonths: MonthPart[];
+}
+
 const REGION_SPANS_SQL: SqlQuery = {
   sql: `SELECT g.id AS region_id, DATE_FORMAT(MIN(c.active_from), :monthFormat) AS first_month,
                DATE_FORMAT(MAX(COALESCE(c.active_to, :openEnd)), :monthFormat) AS last_month
@@ -112,12 +130,13 @@ export class SnapshotBuilder {
   ) {}
 
   /**
-   * The snapshots one chapter-month touches, and the campaigns its receipts credit. The region is
-   * rolled up from its chapters' tallies in the periods, with the flows of the month itself summed
-   * from its facts and those of the periods' other months taken from the region's stored month
-   * rows; the network from that region and the other regions' stored rows. So the work does not
-   * grow with the size of the network or the length of its history. Chapters have no stored
-   * rows: their figures are read live (ChapterFigures).
+   * The snapshots one chapter-month touches, and the campaigns its receipts credit. The region's
+   * month is rolled up from its chapters' tallies of that month; its quarter and fiscal year add
+   * up that month and the region's other stored months, with each period's stock summed by the
+   * database (`periodStockSql`); the network adds up that region and the other regions' stored
+   * rows. So the work grows neither with the size of the network nor with the length of its
+   * history, and reads one month of tallies, not a year's. Chapters have no stored rows: their
+   * figures are read live (ChapterFigures).
    */
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async () => {
@@ -136,26 +155,38 @@ export class SnapshotBuilder {
       if (!chapter) throw new Error(`chapter ${chapterId} does not exist`);
       const targets = targetsOfChapterMonth(chapter, month, fiscalYearStartMonth, STORED_SCOPES);
       const periods = targets.filter((target) => target.scope === 'network').map((t) => t.period);
+      const longer = periods.filter((period) => period.kind !== 'month');
       const range = monthRangeOf(targets)!;
       const chapterIds = inRegion.map((each) => each.chapterId);
-      const [statuses, monthFlows, stored, campaignIds] = await Promise.all([
-        this.pooledStatuses({ chapterIds, ...range }),
+      const [statuses, flows, stored, stocks, campaignIds] = await Promise.all([
+        this.pooledStatuses({ chapterIds, from: month, to: month }),
         this.pooledFlows({ chapterIds, from: month, to: month }),
         this.storedRegionRows(periods, chapter.regionId, range, spansRead),
+        this.pooledPeriodStocks(chapterIds, longer),
         campaignsRead.then((rows) => rows.map((row) => Number(row.campaign_id))),
       ]);
       const today = new Date().toISOString().slice(0, 10);
-      const flows = [
-        ...monthFlows,
-        ...(await this.otherMonthFlows(stored.ownMonths, month, range, chapterIds, today)),
-      ];
-      const rollup = new SnapshotRollup(
-        targets.filter((target) => target.scope === 'region'),
+      // The region's month from its chapters' tallies; its quarter and fiscal year from its
+      // months (this one, and the others as stored) with the stock of each period.
+      const months = await this.regionMonthsFromFacts(
+        { regionId: chapter.regionId, month, chapters: inRegion, statuses, flows },
+        this.unbuiltMonths(stored, chapter.regionId, month, range, today),
         today,
       );
-      rollup.addStatuses(inRegion, statuses);
-      rollup.addFlows(flows);
-      const built = rollup.snapshots();
+      const monthParts: MonthPart[] = [
+        ...stored.ownMonths.filter((part) => part.month !== month),
+        ...months.map((snapshot) => ({ ...snapshot, month: snapshot.period.key })),
+      ];
+      const built = [
+        months.find((snapshot) => snapshot.period.key === month)!,
+        ...longer.map((period, index) =>
+          regionPeriodFromMonths(
+            { scope: 'region', scopeId: chapter.regionId, period },
+            monthParts,
+            stocks[index],
+          ),
+        ),
+      ];
 
       const { otherRegions, regions } = stored;
       // A region without a row for a period (nothing filed there since the last full rebuild)
@@ -205,28 +236,70 @@ export class SnapshotBuilder {
   }
 
   /**
-   * The flows of the region's months in `range` other than `month`, from its stored month rows.
-   * A month without one (none built since the last full rebuild) is summed from its facts; a
-   * month after today can have no tally.
+   * The region's months in `range` other than `month` that have no stored row (none built since
+   * the last full rebuild) but may count: within its chapters' active months and not after
+   * today. They are rolled up from their facts.
    */
-  private async otherMonthFlows(
-    ownMonths: MonthFlows[],
+  private unbuiltMonths(
+    stored: StoredRegionRows,
+    regionId: number,
     month: MonthKey,
     range: { from: MonthKey; to: MonthKey },
-    chapterIds: number[],
     today: string,
-  ): Promise<MonthFlows[]> {
-    const storedMonths = new Set(ownMonths.map((row) => row.month));
-    const unbuilt = monthsBetween(range.from, range.to).filter(
-      (each) => each !== month && each <= today.slice(0, 7) && !storedMonths.has(each),
+  ): MonthKey[] {
+    const span = stored.regions.find((region) => region.regionId === regionId);
+    if (!span?.firstMonth) return [];
+    const currentMonth = today.slice(0, 7);
+    const last = span.lastMonth! < currentMonth ? span.lastMonth! : currentMonth;
+    const storedMonths = new Set(stored.ownMonths.map((part) => part.month));
+    return monthsBetween(range.from, range.to).filter(
+      (each) =>
+        each !== month && each >= span.firstMonth! && each <= last && !storedMonths.has(each),
     );
-    const others = ownMonths.filter((row) => row.month !== month);
-    if (unbuilt.length === 0) return others;
-    const wanted = new Set(unbuilt);
-    const fromFacts = (
-      await this.pooledFlows({ chapterIds, from: unbuilt[0], to: unbuilt.at(-1)! })
-    ).filter((row) => wanted.has(row.month));
-    return [...others, ...fromFacts];
+  }
+
+  /**
+   * The region's snapshots of `month` (from the statuses and flows read for it) and of each of
+   * `unbuilt` (read here), rolled up from its chapters' tallies.
+   */
+  private async regionMonthsFromFacts(
+    read: {
+      regionId: number;
+      month: MonthKey;
+      chapters: ChapterInfo[];
+      statuses: TallyStatus[];
+      flows: MonthFlows[];
+    },
+    unbuilt: MonthKey[],
+    today: string,
+  ): Promise<BuiltSnapshot[]> {
+    const statuses = [...read.statuses];
+    const flows = [...read.flows];
+    if (unbuilt.length > 0) {
+      const filter = {
+        chapterIds: read.chapters.map((each) => each.chapterId),
+        from: unbuilt[0],
+        to: unbuilt.at(-1)!,
+      };
+      const [moreStatuses, moreFlows] = await Promise.all([
+        this.pooledStatuses(filter),
+        this.pooledFlows(filter),
+      ]);
+      // The roll-up reads only the months it is asked for, so the month between is ignored.
+      statuses.push(...moreStatuses.filter((status) => status.month !== read.month));
+      flows.push(...moreFlows.filter((row) => row.month !== read.month));
+    }
+    const rollup = new SnapshotRollup(
+      [read.month, ...unbuilt].map((each) => ({
+        scope: 'region' as const,
+        scopeId: read.regionId,
+        period: monthPeriod(each),
+      })),
+      today,
+    );
+    rollup.addStatuses(read.chapters, statuses);
+    rollup.addFlows(flows);
+    return rollup.snapshots();
   }
 
   /** Regions' snapshots for these targets, rolled up from their chapters' facts. */
@@ -249,19 +322,15 @@ export class SnapshotBuilder {
 
   /**
    * Every region with its chapters' active months, and stored rows: the other regions' rows of
-   * these periods (for the network), and one region's month rows in `range` as flows (stock is
-   * read from the statuses).
+   * these periods (for the network), and one region's month rows in `range` (for its quarter and
+   * fiscal year).
    */
   private async storedRegionRows(
     periods: Period[],
     regionId: number,
     range: { from: MonthKey; to: MonthKey },
     spansRead: Promise<Row[]>,
-  ): Promise<{
-    regions: RegionSpan[];
-    otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>;
-    ownMonths: MonthFlows[];
-  }> {
+  ): Promise<StoredRegionRows> {
     const replacements: Record<string, unknown> = {
       regionId,
       fromKey: range.from,
@@ -285,15 +354,15 @@ export class SnapshotBuilder {
       }),
     ]);
     const otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }> = [];
-    const ownMonths: MonthFlows[] = [];
+    const ownMonths: MonthPart[] = [];
     for (const row of rows) {
       const scopeId = Number(row.scope_id);
       if (scopeId === regionId) {
         ownMonths.push({
-          chapterId: null,
-          regionId,
           month: String(row.period_key),
           figures: jsonColumn(row.figures),
+          compliance: jsonColumn(row.compliance),
+          pendingTallies: Number(row.pending_tallies),
         });
         continue;
       }
@@ -500,6 +569,15 @@ export class SnapshotBuilder {
 
   private async pooledStatuses(filter: FactsFilter): Promise<TallyStatus[]> {
     return (await this.pooled(tallyStatusSql(filter))).map(tallyStatusFromRow);
+  }
+
+  /** Each period's stock of these chapters, in the order of `periods`. */
+  private async pooledPeriodStocks(
+    chapterIds: number[],
+    periods: Period[],
+  ): Promise<PeriodStock[]> {
+    const rows = await this.pooled(periodStockSql({ chapterIds, periods }));
+    return periodStocksFromRows(rows, periods.length);
   }
 
   /**
