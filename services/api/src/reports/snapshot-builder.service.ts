@@ -98,20 +98,39 @@ interface RegionSpan {
   lastMonth: MonthKey | null;
 }
 
+/** A stored region row of one period, as far as the network needs it. */
+type StoredRegionPart = RegionPart & { period: Pick<Period, 'kind' | 'key'> };
+
 /** What `storedRegionRows` reads for an incremental rebuild. */
 interface StoredRegionRows {
-  regions: RegionSpan[];
-  otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }>;
+  /** Every region of the network. */
+  regionIds: number[];
+  otherRegions: StoredRegionPart[];
   ownMonths: MonthPart[];
 }
 
-const REGION_SPANS_SQL: SqlQuery = {
+/** The regions' spans (see RegionSpan). */
+const regionSpansSql = (regionIds: number[]): SqlQuery => ({
   sql: `SELECT g.id AS region_id, DATE_FORMAT(MIN(c.active_from), :monthFormat) AS first_month,
                DATE_FORMAT(MAX(COALESCE(c.active_to, :openEnd)), :monthFormat) AS last_month
           FROM regions g LEFT JOIN chapters c ON c.region_id = g.id
+         WHERE g.id IN (:regionIds)
          GROUP BY g.id`,
-  replacements: { monthFormat: '%Y-%m', openEnd: '9999-12-31' },
-};
+  replacements: { monthFormat: '%Y-%m', openEnd: '9999-12-31', regionIds },
+});
+
+/** The span of these chapters' active months (null months for none). */
+function spanOf(chapters: readonly ChapterInfo[]): Omit<RegionSpan, 'regionId'> {
+  let firstMonth: MonthKey | null = null;
+  let lastMonth: MonthKey | null = null;
+  for (const chapter of chapters) {
+    const from = chapter.activeFrom.slice(0, 7);
+    const to = chapter.activeTo?.slice(0, 7) ?? '9999-12';
+    if (firstMonth === null || from < firstMonth) firstMonth = from;
+    if (lastMonth === null || to > lastMonth) lastMonth = to;
+  }
+  return { firstMonth, lastMonth };
+}
 
 /**
  * Builds the stored report snapshots (regions and the network) and campaign snapshots from
@@ -141,12 +160,11 @@ export class SnapshotBuilder {
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async () => {
       // Reads side by side on pooled connections, outside the write transaction: the lock keeps
-      // every other rebuild out, and each statement sees what was committed when it began. Those
-      // that need neither the region nor the fiscal year start at once.
-      const spansRead = this.pooled(REGION_SPANS_SQL);
+      // every other rebuild out, and each statement sees what was committed when it began. The
+      // one that needs neither the region nor the fiscal year starts at once.
       const campaignsRead = this.pooled(campaignsOfChapterMonthSql(chapterId, month));
       // Awaited below; this only keeps a failure meanwhile from going unhandled.
-      for (const read of [spansRead, campaignsRead]) read.catch(() => undefined);
+      campaignsRead.catch(() => undefined);
       const [inRegion, { fiscalYearStartMonth }] = await Promise.all([
         this.pooledChapters({ regionOfChapterId: chapterId }),
         this.settings.current(),
@@ -161,7 +179,7 @@ export class SnapshotBuilder {
       const [statuses, flows, stored, stocks, campaignIds] = await Promise.all([
         this.pooledStatuses({ chapterIds, from: month, to: month }),
         this.pooledFlows({ chapterIds, from: month, to: month }),
-        this.storedRegionRows(periods, chapter.regionId, range, spansRead),
+        this.storedRegionRows(periods, chapter.regionId, range),
         this.pooledPeriodStocks(chapterIds, longer),
         campaignsRead.then((rows) => rows.map((row) => Number(row.campaign_id))),
       ]);
@@ -170,7 +188,7 @@ export class SnapshotBuilder {
       // months (this one, and the others as stored) with the stock of each period.
       const months = await this.regionMonthsFromFacts(
         { regionId: chapter.regionId, month, chapters: inRegion, statuses, flows },
-        this.unbuiltMonths(stored, chapter.regionId, month, range, today),
+        this.unbuiltMonths(stored, spanOf(inRegion), month, range, today),
         today,
       );
       const monthParts: MonthPart[] = [
@@ -188,29 +206,10 @@ export class SnapshotBuilder {
         ),
       ];
 
-      const { otherRegions, regions } = stored;
-      // A region without a row for a period (nothing filed there since the last full rebuild)
-      // is built from its facts, so its chapters still count as missing or open; unless none of
-      // its chapters was active then (a region set up later), which adds nothing.
-      const currentMonth = today.slice(0, 7);
-      const missing = periods.flatMap((period) =>
-        regions
-          .filter(
-            (region) =>
-              region.regionId !== chapter.regionId &&
-              region.firstMonth !== null &&
-              region.firstMonth <= (period.to < currentMonth ? period.to : currentMonth) &&
-              region.lastMonth! >= period.from &&
-              !otherRegions.some(
-                (each) =>
-                  each.scopeId === region.regionId &&
-                  each.period.kind === period.kind &&
-                  each.period.key === period.key,
-              ),
-          )
-          .map((region) => ({ scope: 'region' as const, scopeId: region.regionId, period })),
-      );
-      if (missing.length > 0) otherRegions.push(...(await this.regionsFromFacts(missing, today)));
+      const otherRegions = [
+        ...stored.otherRegions,
+        ...(await this.otherRegionsWithoutRows(periods, stored, chapter.regionId, today)),
+      ];
       for (const period of periods) {
         const samePeriod = (each: { period: Pick<Period, 'kind' | 'key'> }) =>
           each.period.kind === period.kind && each.period.key === period.key;
@@ -242,13 +241,12 @@ export class SnapshotBuilder {
    */
   private unbuiltMonths(
     stored: StoredRegionRows,
-    regionId: number,
+    span: Omit<RegionSpan, 'regionId'>,
     month: MonthKey,
     range: { from: MonthKey; to: MonthKey },
     today: string,
   ): MonthKey[] {
-    const span = stored.regions.find((region) => region.regionId === regionId);
-    if (!span?.firstMonth) return [];
+    if (!span.firstMonth) return [];
     const currentMonth = today.slice(0, 7);
     const last = span.lastMonth! < currentMonth ? span.lastMonth! : currentMonth;
     const storedMonths = new Set(stored.ownMonths.map((part) => part.month));
@@ -302,6 +300,52 @@ export class SnapshotBuilder {
     return rollup.snapshots();
   }
 
+  /**
+   * The other regions without a stored row for one of the periods (nothing filed there since
+   * the last full rebuild), built from their facts so their chapters still count as missing or
+   * open; unless none of their chapters was active then (a region set up later), which adds
+   * nothing. Their spans are read only when some row is missing, which is seldom.
+   */
+  private async otherRegionsWithoutRows(
+    periods: Period[],
+    stored: StoredRegionRows,
+    regionId: number,
+    today: string,
+  ): Promise<BuiltSnapshot[]> {
+    const has = new Set(
+      stored.otherRegions.map((row) => `${row.scopeId}:${row.period.kind}:${row.period.key}`),
+    );
+    const lacking = periods.flatMap((period) =>
+      stored.regionIds
+        .filter((id) => id !== regionId && !has.has(`${id}:${period.kind}:${period.key}`))
+        .map((id) => ({ regionId: id, period })),
+    );
+    if (lacking.length === 0) return [];
+    const spans = new Map(
+      (await this.pooled(regionSpansSql([...new Set(lacking.map((each) => each.regionId))]))).map(
+        (row) => [
+          Number(row.region_id),
+          {
+            firstMonth: orNull(row.first_month, String),
+            lastMonth: orNull(row.last_month, String),
+          },
+        ],
+      ),
+    );
+    const currentMonth = today.slice(0, 7);
+    const missing = lacking
+      .filter(({ regionId: id, period }) => {
+        const span = spans.get(id);
+        return (
+          span?.firstMonth != null &&
+          span.firstMonth <= (period.to < currentMonth ? period.to : currentMonth) &&
+          span.lastMonth! >= period.from
+        );
+      })
+      .map(({ regionId: id, period }) => ({ scope: 'region' as const, scopeId: id, period }));
+    return missing.length > 0 ? this.regionsFromFacts(missing, today) : [];
+  }
+
   /** Regions' snapshots for these targets, rolled up from their chapters' facts. */
   private async regionsFromFacts(
     targets: SnapshotTarget[],
@@ -321,15 +365,13 @@ export class SnapshotBuilder {
   }
 
   /**
-   * Every region with its chapters' active months, and stored rows: the other regions' rows of
-   * these periods (for the network), and one region's month rows in `range` (for its quarter and
-   * fiscal year).
+   * Every region, and stored rows: the other regions' rows of these periods (for the network),
+   * and one region's month rows in `range` (for its quarter and fiscal year).
    */
   private async storedRegionRows(
     periods: Period[],
     regionId: number,
     range: { from: MonthKey; to: MonthKey },
-    spansRead: Promise<Row[]>,
   ): Promise<StoredRegionRows> {
     const replacements: Record<string, unknown> = {
       regionId,
@@ -341,48 +383,40 @@ export class SnapshotBuilder {
       replacements[`key${index}`] = period.key;
       return `(period_kind = :kind${index} AND period_key = :key${index})`;
     });
-    const [regions, rows] = await Promise.all([
-      spansRead,
-      this.pooled({
-        sql: `SELECT scope_id, period_kind, period_key, figures, compliance, pending_tallies
-                FROM report_snapshots
-               WHERE scope = 'region' AND (
-                     (scope_id <> :regionId AND (${wanted.join(' OR ')}))
-                  OR (scope_id = :regionId AND period_kind = 'month'
-                      AND period_key BETWEEN :fromKey AND :toKey))`,
-        replacements,
-      }),
-    ]);
-    const otherRegions: Array<RegionPart & { period: Pick<Period, 'kind' | 'key'> }> = [];
+    // The regions' ids are added as rows without a period: a join from the regions would make
+    // the server read every stored row of each region to find the few wanted.
+    const rows = await this.pooled({
+      sql: `SELECT scope_id AS region_id, period_kind, period_key, figures, compliance,
+                   pending_tallies
+              FROM report_snapshots
+             WHERE scope = 'region' AND (
+                   (scope_id <> :regionId AND (${wanted.join(' OR ')}))
+                OR (scope_id = :regionId AND period_kind = 'month'
+                    AND period_key BETWEEN :fromKey AND :toKey))
+            UNION ALL
+            SELECT id, NULL, NULL, NULL, NULL, NULL FROM regions`,
+      replacements,
+    });
+    const regionIds = new Set<number>();
+    const otherRegions: StoredRegionPart[] = [];
     const ownMonths: MonthPart[] = [];
     for (const row of rows) {
-      const scopeId = Number(row.scope_id);
-      if (scopeId === regionId) {
-        ownMonths.push({
-          month: String(row.period_key),
-          figures: jsonColumn(row.figures),
-          compliance: jsonColumn(row.compliance),
-          pendingTallies: Number(row.pending_tallies),
-        });
-        continue;
-      }
-      otherRegions.push({
-        scopeId,
-        period: { kind: row.period_kind as Period['kind'], key: String(row.period_key) },
-        figures: jsonColumn(row.figures),
-        compliance: jsonColumn(row.compliance),
+      const scopeId = Number(row.region_id);
+      regionIds.add(scopeId);
+      const key = row.period_key;
+      if (typeof key !== 'string') continue;
+      const part = {
+        figures: jsonColumn<BuiltSnapshot['figures']>(row.figures),
+        compliance: jsonColumn<BuiltSnapshot['compliance']>(row.compliance),
         pendingTallies: Number(row.pending_tallies),
-      });
+      };
+      if (scopeId === regionId) ownMonths.push({ ...part, month: key });
+      else {
+        const kind = row.period_kind as Period['kind'];
+        otherRegions.push({ ...part, scopeId, period: { kind, key } });
+      }
     }
-    return {
-      regions: regions.map((row) => ({
-        regionId: Number(row.region_id),
-        firstMonth: orNull(row.first_month, String),
-        lastMonth: orNull(row.last_month, String),
-      })),
-      otherRegions,
-      ownMonths,
-    };
+    return { regionIds: [...regionIds], otherRegions, ownMonths };
   }
 
   /** Every stored scope × every period from the network's first tally, and every campaign. */
