@@ -1,3 +1,4 @@
+import { factJoinsSql, flowColumns } from './chapter-month-facts';
 import { chaptersSql, periodStockSql, periodStocksFromRows, tallyStatusSql } from './tally-status';
 
 describe('chaptersSql', () => {
@@ -79,5 +80,18 @@ describe('periodStockSql', () => {
       { panels: 0, blankets: 0 },
       { panels: 12, blankets: 3 },
     ]);
+  });
+});
+
+describe('tallyStatusSql with flows', () => {
+  it("adds the approved revision's flow columns and their line totals, still one row per tally", () => {
+    const plain = tallyStatusSql({ chapterIds: [2] });
+    const { sql, replacements } = tallyStatusSql({ chapterIds: [2] }, { withFlows: true });
+    for (const [column] of flowColumns()) expect(sql).toContain(` AS ${column}`);
+    expect(sql).toContain(factJoinsSql());
+    expect(plain.sql).not.toContain('panels_accepted');
+    // Each line table is summed per revision before the join: no fan-out.
+    expect(sql.match(/GROUP BY l.revision_id/g)).toHaveLength(3);
+    expect(replacements).toEqual(plain.replacements);
   });
 });

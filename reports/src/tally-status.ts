@@ -3,6 +3,7 @@
  * filed when (compliance), and which are pending (filed but not approved, see TALLY_SNAPSHOT).
  */
 import type { Period } from '@tallyloom/core';
+import { factJoinsSql, flowColumns } from './chapter-month-facts';
 import { monthStartDate, requireIds, type SqlQuery } from './sql';
 import { PENDING_TALLY_CONDITION } from './tally-snapshot';
 
@@ -59,9 +60,13 @@ export interface TallyStatusFilter extends ChapterFilter {
 /**
  * One row per monthly tally in any state: chapter_id, month ('YYYY-MM'), first_submitted_at
  * (for on time / late), pending (1 when filed but its figures are not approved), and when it has
- * an approved revision: tally_id, approved_revision and that revision's closing stocks.
+ * an approved revision: tally_id, approved_revision and that revision's closing stocks; and with
+ * `withFlows`, its flow columns as `figuresFromRow` reads them.
  */
-export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
+export function tallyStatusSql(
+  filter: TallyStatusFilter = {},
+  { withFlows = false }: { withFlows?: boolean } = {},
+): SqlQuery {
   const where: string[] = [];
   const replacements: Record<string, unknown> = {
     monthFormat: '%Y-%m',
@@ -90,8 +95,14 @@ export function tallyStatusSql(filter: TallyStatusFilter = {}): SqlQuery {
       // The approved revision's closing stock and identity: a period's stock is each chapter's
       // closing in its last approved month, and a snapshot names the revisions it counts.
       '  t.id AS tally_id, t.approved_revision, r.panels_closing, r.blankets_closing',
+      // With flows: the approved revision's flow columns too (NULL without one), so one
+      // statement gives an incremental rebuild a month's statuses and figures.
+      ...(withFlows
+        ? flowColumns().map(([column, expression]) => `  , ${expression} AS ${column}`)
+        : []),
       'FROM monthly_tallies t',
       'LEFT JOIN tally_revisions r ON r.tally_id = t.id AND r.revision = t.approved_revision',
+      withFlows ? factJoinsSql() : '',
       where.length > 0 ? `WHERE ${where.join(' AND ')}` : '',
       'ORDER BY t.chapter_id, t.month',
     ].join('\n'),

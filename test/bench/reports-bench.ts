@@ -174,7 +174,7 @@ export async function benchReports(input: ReportsBenchInput): Promise<ReportsBen
           measure: 'incremental ÷ full rebuild',
           value: ratio(incrementalMs, first.ms),
           target: '≤ 0.01',
-          detail: `median of ${incremental.length}: ${incrementalMs.toFixed(0)} ms`,
+          detail: `median of ${incremental.length}: ${incrementalMs.toFixed(0)} ms (${Math.min(...incremental).toFixed(0)}–${Math.max(...incremental).toFixed(0)})`,
         },
         {
           measure: `dashboard p95 ÷ health p95 (${input.connections} clients)`,

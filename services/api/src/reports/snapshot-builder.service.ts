@@ -12,6 +12,7 @@ import {
   campaignCreditFromRow,
   campaignCreditSql,
   campaignsOfChapterMonthSql,
+  figuresFromRow,
   chaptersSql,
   monthRangeOf,
   networkFromRegions,
@@ -176,9 +177,8 @@ export class SnapshotBuilder {
       const longer = periods.filter((period) => period.kind !== 'month');
       const range = monthRangeOf(targets)!;
       const chapterIds = inRegion.map((each) => each.chapterId);
-      const [statuses, flows, stored, stocks, campaignIds] = await Promise.all([
-        this.pooledStatuses({ chapterIds, from: month, to: month }),
-        this.pooledFlows({ chapterIds, from: month, to: month }),
+      const [{ statuses, flows }, stored, stocks, campaignIds] = await Promise.all([
+        this.pooledStatusesWithFlows({ chapterIds, from: month, to: month }, chapter.regionId),
         this.storedRegionRows(periods, chapter.regionId, range),
         this.pooledPeriodStocks(chapterIds, longer),
         campaignsRead.then((rows) => rows.map((row) => Number(row.campaign_id))),
@@ -279,10 +279,10 @@ export class SnapshotBuilder {
         from: unbuilt[0],
         to: unbuilt.at(-1)!,
       };
-      const [moreStatuses, moreFlows] = await Promise.all([
-        this.pooledStatuses(filter),
-        this.pooledFlows(filter),
-      ]);
+      const { statuses: moreStatuses, flows: moreFlows } = await this.pooledStatusesWithFlows(
+        filter,
+        read.regionId,
+      );
       // The roll-up reads only the months it is asked for, so the month between is ignored.
       statuses.push(...moreStatuses.filter((status) => status.month !== read.month));
       flows.push(...moreFlows.filter((row) => row.month !== read.month));
@@ -603,6 +603,23 @@ export class SnapshotBuilder {
 
   private async pooledStatuses(filter: FactsFilter): Promise<TallyStatus[]> {
     return (await this.pooled(tallyStatusSql(filter))).map(tallyStatusFromRow);
+  }
+
+  /**
+   * Statuses, and the flows of each approved tally (per chapter), from one statement: what an
+   * incremental rebuild needs of a region's month.
+   */
+  private async pooledStatusesWithFlows(
+    filter: FactsFilter,
+    regionId: number,
+  ): Promise<{ statuses: TallyStatus[]; flows: MonthFlows[] }> {
+    const rows = await this.pooled(tallyStatusSql(filter, { withFlows: true }));
+    const statuses = rows.map(tallyStatusFromRow);
+    const flows = rows.flatMap((row, index): MonthFlows[] => {
+      const { chapterId, month, approved } = statuses[index];
+      return approved ? [{ chapterId, regionId, month, figures: figuresFromRow(row) }] : [];
+    });
+    return { statuses, flows };
   }
 
   /** Each period's stock of these chapters, in the order of `periods`. */
