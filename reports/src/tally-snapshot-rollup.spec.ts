@@ -40,7 +40,12 @@ const chapters: ChapterInfo[] = [
 ];
 const facts = [
   fact(1, '2026-01', 11, { panelsAccepted: 10, panelsInStock: 5, volunteerHours: 1.1 }),
-  fact(1, '2026-02', 12, { panelsAccepted: 20, panelsInStock: 8, volunteerHours: 2.2 }),
+  fact(1, '2026-02', 12, {
+    panelsAccepted: 20,
+    panelsInStock: 8,
+    blanketsInStock: 3,
+    volunteerHours: 2.2,
+  }),
   fact(2, '2026-03', 21, { panelsAccepted: 1, panelsInStock: 100 }),
 ];
 const statuses: Array<Omit<TallyStatus, 'approved'>> = [
@@ -341,16 +346,19 @@ describe('regionPeriodFromMonths', () => {
         .filter((each) => each.scopeId === period.scopeId && each.period.kind === 'month')
         .map((each) => ({ ...each, month: each.period.key }));
       // Stock by hand: each of the region's chapters' closing in its last approved month.
-      const lastClosing = (chapterId: number) =>
-        facts
-          .filter((f) => f.chapterId === chapterId)
-          .filter((f) => f.month >= period.period.from && f.month <= period.period.to)
-          .sort((a, b) => a.month.localeCompare(b.month))
-          .at(-1)?.figures.panelsInStock ?? 0;
-      const panels = chapters
-        .filter((chapter) => chapter.regionId === period.scopeId)
-        .reduce((sum, chapter) => sum + lastClosing(chapter.chapterId), 0);
-      expect(regionPeriodFromMonths(period, months, { panels, blankets: 0 })).toEqual(period);
+      const stockOf = (measure: 'panelsInStock' | 'blanketsInStock') =>
+        chapters
+          .filter((chapter) => chapter.regionId === period.scopeId)
+          .reduce((sum, chapter) => {
+            const last = facts
+              .filter((f) => f.chapterId === chapter.chapterId)
+              .filter((f) => f.month >= period.period.from && f.month <= period.period.to)
+              .sort((a, b) => a.month.localeCompare(b.month))
+              .at(-1);
+            return sum + (last?.figures[measure] ?? 0);
+          }, 0);
+      const stock = { panels: stockOf('panelsInStock'), blankets: stockOf('blanketsInStock') };
+      expect(regionPeriodFromMonths(period, months, stock)).toEqual(period);
     }
     // Region 1's first quarter: chapter 1's February closing (8) and chapter 2's March (100).
     expect(built.find((s) => s.scopeId === 1 && s.period.key === '2026-Q1')!.figures).toMatchObject(

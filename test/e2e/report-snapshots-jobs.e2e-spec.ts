@@ -223,10 +223,11 @@ describe('report snapshots: rebuilt by jobs after approvals', () => {
     });
     expect(amending.status).toBe(200);
     const draft = amending.body as TallyDetail;
-    await queueOf(testApp.app, QueueName.Reports)
-      .add(ReportJob.ChapterMonth, { chapterId: world.chapter.id, month: SECOND })
-      .then((job) => job.finished());
-    const whileAmending = await ofChapter(world);
+    // Starting the amendment queues its own rebuild: the region's row counts it as pending.
+    const whileAmending = await eventually(
+      world,
+      (rows) => row(rows, 'region', SECOND)?.pendingTallies === 1,
+    );
     expect(row(whileAmending, 'chapter', SECOND)!.pendingTallies).toBe(1);
     expect(row(whileAmending, 'chapter', SECOND)!.sourceRevisions).toEqual([[second.id, 1]]);
     await expectRecomputed(whileAmending);

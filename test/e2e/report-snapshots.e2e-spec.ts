@@ -1,4 +1,5 @@
 import { getConnectionToken } from '@nestjs/sequelize';
+import { periodsContaining } from '@tallyloom/core';
 import { QueryTypes } from 'sequelize';
 import type { Sequelize } from 'sequelize-typescript';
 import { SnapshotBuilder } from '../../services/api/src/reports/snapshot-builder.service';
@@ -338,33 +339,68 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
 
     // Then a few changes, each followed by the job's incremental rebuild of its chapter-month:
     // the region's month from its tallies, its quarter and fiscal year from its months and
-    // each period's stock, the network from the regions. One region month row is dropped
-    // first, as if it had never been built: the rebuilds must roll it up from its tallies.
+    // each period's stock, the network from the regions. Two other months of the first
+    // change's fiscal year are spoiled first: one row dropped, as if never built, and one
+    // marked as built on an earlier day, with a pending count no tally has. The rebuilds must
+    // roll both up from their tallies instead of adding up what is stored.
+    const changedAt = new Date(Date.now() - 1000);
     const changes = await changeTallies(random, regionIds);
     expect(changes.length).toBeGreaterThan(2);
-    const [dropped] = changes;
-    const droppedMonth = monthBefore(dropped.month);
-    await sequelize.query(
-      `DELETE FROM report_snapshots
+    const [first] = changes;
+    const fiscalYear = periodsContaining(first.month, fiscalYearStartMonth)[2];
+    const others = await sequelize.query<{ period_key: string }>(
+      `SELECT period_key FROM report_snapshots
         WHERE scope = 'region' AND scope_id = :regionId AND period_kind = 'month'
-          AND period_key = :month`,
-      { replacements: { regionId: dropped.regionId, month: droppedMonth } },
+          AND period_key BETWEEN :from AND :to AND period_key <> :month
+        ORDER BY period_key`,
+      {
+        type: QueryTypes.SELECT,
+        replacements: { regionId: first.regionId, ...fiscalYear, month: first.month },
+      },
     );
-    for (const change of changes)
+    expect(others.length).toBeGreaterThanOrEqual(2);
+    const [droppedMonth, staleMonth] = [others[0].period_key, others.at(-1)!.period_key];
+    const spoil = (sql: string, month: string) =>
+      sequelize.query(
+        `${sql} WHERE scope = 'region' AND scope_id = :regionId AND period_kind = 'month'
+            AND period_key = :month`,
+        { type: QueryTypes.UPDATE, replacements: { regionId: first.regionId, month } },
+      );
+    await spoil('DELETE FROM report_snapshots', droppedMonth);
+    await spoil(
+      `UPDATE report_snapshots SET as_of = '2000-01-01 00:00:00',
+              pending_tallies = pending_tallies + 7`,
+      staleMonth,
+    );
+    for (const change of changes) {
       await builder.rebuildForChapterMonth(change.chapterId, change.month);
+    }
     const changedWorld = await readWorld(testApp.app);
     const afterChanges = await withChapters(
       await storedSnapshots(testApp.app),
       changedWorld,
       regionIds,
     );
-    // Every figure, stock, compliance and pending count equals a recompute. Only the rows that
-    // add up the dropped month cannot name its revisions yet: they name them through it.
-    const withoutDropped = checkScopes(changedWorld, afterChanges, regionIds).problems.filter(
-      (problem) =>
-        !problem.startsWith(`region:${dropped.regionId} `) || !problem.endsWith(' sources differ'),
-    );
-    expect(withoutDropped).toEqual([]);
+    // Every figure, stock, compliance and pending count equals a recompute, the first change's
+    // quarter and year included. Only two things are left as spoiled: the stale month's own row
+    // (no change was in it), and the source lists of the rows that add up the dropped month
+    // (they name its revisions through its row).
+    const droppedIn = periodsContaining(droppedMonth, fiscalYearStartMonth).map((p) => p.key);
+    const spoiledOnly = (problem: string) =>
+      problem.startsWith(`region:${first.regionId} ${staleMonth} `) ||
+      droppedIn.some(
+        (key) =>
+          problem.startsWith(`region:${first.regionId} ${key} `) &&
+          problem.endsWith(' sources differ'),
+      );
+    const afterProblems = checkScopes(changedWorld, afterChanges, regionIds).problems;
+    expect(afterProblems.filter((problem) => !spoiledOnly(problem))).toEqual([]);
+    // The spoiled stale row is still there to be ignored: the check above could have seen it.
+    expect(
+      afterProblems.some((problem) =>
+        problem.startsWith(`region:${first.regionId} ${staleMonth} `),
+      ),
+    ).toBe(true);
     // The changes reached the rows: an incremental rebuild wrote each changed month's region row.
     for (const change of changes) {
       const row = afterChanges.find(
@@ -373,31 +409,27 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
           each.scopeId === change.regionId &&
           each.periodKey === change.month,
       );
-      expect(row?.asOf.getTime()).toBeGreaterThanOrEqual(change.at.getTime());
+      expect(row?.asOf.getTime()).toBeGreaterThanOrEqual(changedAt.getTime());
     }
-    // The dropped month is built again by its own job; then every row names its revisions.
-    await builder.rebuildForChapterMonth(dropped.chapterId, droppedMonth);
+    // The spoiled months are built again by their own jobs; then every row is right and names
+    // its revisions.
+    for (const month of [droppedMonth, staleMonth]) {
+      await builder.rebuildForChapterMonth(first.chapterId, month);
+    }
     const rebuilt = await withChapters(await storedSnapshots(testApp.app), changedWorld, regionIds);
     expect(checkScopes(changedWorld, rebuilt, regionIds).problems).toEqual([]);
     expect(missingRows(changedWorld, rebuilt, chapterIds)).toEqual([]);
     expect(checkNetwork(changedWorld, rebuilt, chapterIds)).toEqual([]);
   });
 
-  /** 'YYYY-MM' of the month before. */
-  function monthBefore(month: string): string {
-    const [year, number] = month.split('-').map(Number);
-    return number === 1 ? `${year - 1}-12` : `${year}-${String(number - 1).padStart(2, '0')}`;
-  }
-
   /**
    * Changes a few tallies of the regions as the tally workflow would leave them: an approved
    * revision's counts and closing stock corrected, a submitted tally approved, a draft filed.
-   * The first change is in a month after the chapter's first, so the month before it exists.
    */
   async function changeTallies(
     random: ReturnType<typeof seeded>,
     regionIds: number[],
-  ): Promise<Array<{ chapterId: number; regionId: number; month: string; at: Date }>> {
+  ): Promise<Array<{ chapterId: number; regionId: number; month: string }>> {
     const tallies = await sequelize.query<{
       id: number;
       chapter_id: number;
@@ -410,7 +442,7 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
       `SELECT t.id, t.chapter_id, c.region_id, DATE_FORMAT(t.month, '%Y-%m') AS month, t.state,
               t.current_revision, t.approved_revision
          FROM monthly_tallies t JOIN chapters c ON c.id = t.chapter_id
-        WHERE c.region_id IN (:regionIds) AND t.month > '2016-01-01'
+        WHERE c.region_id IN (:regionIds)
         ORDER BY t.id`,
       { type: QueryTypes.SELECT, replacements: { regionIds } },
     );
@@ -461,12 +493,10 @@ describe('report snapshots: a full rebuild equals a direct recompute', () => {
       );
       changes.push(tally);
     }
-    const at = new Date(Date.now() - 1000);
     return changes.map((tally) => ({
       chapterId: tally.chapter_id,
       regionId: tally.region_id,
       month: tally.month,
-      at,
     }));
   }
 });

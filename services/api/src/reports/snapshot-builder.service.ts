@@ -46,6 +46,7 @@ import type { Sequelize } from 'sequelize-typescript';
 import { ViewCache } from '../cache/view-cache';
 import { isoDate, jsonColumn, orNull } from '../common/sql/column-values';
 import { SettingsService } from '../settings/settings.service';
+import { latestMonth } from '../tallies/tally-clock';
 import { CampaignSnapshot } from './models/campaign-snapshot.model';
 import type { RebuildSummary } from './report-jobs';
 import { batchRows, pooledExecute, pooledRows, selectRows } from './driver-rows';
@@ -92,13 +93,6 @@ function snapshotValues(snapshot: BuiltSnapshot, asOfText: string): unknown[] {
 type Progress = (percent: number) => Promise<unknown>;
 type Row = Record<string, unknown>;
 
-/** A region and the months its chapters are active in, first to last ('YYYY-MM'; null if none). */
-interface RegionSpan {
-  regionId: number;
-  firstMonth: MonthKey | null;
-  lastMonth: MonthKey | null;
-}
-
 /** A stored region row of one period, as far as the network needs it. */
 type StoredRegionPart = RegionPart & { period: Pick<Period, 'kind' | 'key'> };
 
@@ -107,10 +101,11 @@ interface StoredRegionRows {
   /** Every region of the network. */
   regionIds: number[];
   otherRegions: StoredRegionPart[];
-  ownMonths: MonthPart[];
+  /** With the UTC day each was built on. */
+  ownMonths: Array<MonthPart & { builtOn: string }>;
 }
 
-/** The regions' spans (see RegionSpan). */
+/** Each region's first and last month any of its chapters is active in ('YYYY-MM'; null for none). */
 const regionSpansSql = (regionIds: number[]): SqlQuery => ({
   sql: `SELECT g.id AS region_id, DATE_FORMAT(MIN(c.active_from), :monthFormat) AS first_month,
                DATE_FORMAT(MAX(COALESCE(c.active_to, :openEnd)), :monthFormat) AS last_month
@@ -119,19 +114,6 @@ const regionSpansSql = (regionIds: number[]): SqlQuery => ({
          GROUP BY g.id`,
   replacements: { monthFormat: '%Y-%m', openEnd: '9999-12-31', regionIds },
 });
-
-/** The span of these chapters' active months (null months for none). */
-function spanOf(chapters: readonly ChapterInfo[]): Omit<RegionSpan, 'regionId'> {
-  let firstMonth: MonthKey | null = null;
-  let lastMonth: MonthKey | null = null;
-  for (const chapter of chapters) {
-    const from = chapter.activeFrom.slice(0, 7);
-    const to = chapter.activeTo?.slice(0, 7) ?? '9999-12';
-    if (firstMonth === null || from < firstMonth) firstMonth = from;
-    if (lastMonth === null || to > lastMonth) lastMonth = to;
-  }
-  return { firstMonth, lastMonth };
-}
 
 /**
  * Builds the stored report snapshots (regions and the network) and campaign snapshots from
@@ -152,11 +134,12 @@ export class SnapshotBuilder {
   /**
    * The snapshots one chapter-month touches, and the campaigns its receipts credit. The region's
    * month is rolled up from its chapters' tallies of that month; its quarter and fiscal year add
-   * up that month and the region's other stored months, with each period's stock summed by the
-   * database (`periodStockSql`); the network adds up that region and the other regions' stored
-   * rows. So the work grows neither with the size of the network nor with the length of its
-   * history, and reads one month of tallies, not a year's. Chapters have no stored rows: their
-   * figures are read live (ChapterFigures).
+   * up that month and the region's other months (stored rows built today, the rest from their
+   * tallies: see `unbuiltMonths`), with each period's stock summed by the database
+   * (`periodStockSql`); the network adds up that region and the other regions' stored rows. So
+   * the work grows neither with the size of the network nor with the length of its history, and
+   * once the nightly rebuild has run it reads one month of tallies, not a year's. Chapters have
+   * no stored rows: their figures are read live (ChapterFigures).
    */
   async rebuildForChapterMonth(chapterId: number, month: MonthKey): Promise<RebuildSummary> {
     return this.lockedThenInvalidate(async () => {
@@ -188,11 +171,12 @@ export class SnapshotBuilder {
       // months (this one, and the others as stored) with the stock of each period.
       const months = await this.regionMonthsFromFacts(
         { regionId: chapter.regionId, month, chapters: inRegion, statuses, flows },
-        this.unbuiltMonths(stored, spanOf(inRegion), month, range, today),
+        this.unbuiltMonths(stored, month, range, today),
         today,
       );
+      const fresh = new Set(months.map((snapshot) => snapshot.period.key));
       const monthParts: MonthPart[] = [
-        ...stored.ownMonths.filter((part) => part.month !== month),
+        ...stored.ownMonths.filter((part) => !fresh.has(part.month)),
         ...months.map((snapshot) => ({ ...snapshot, month: snapshot.period.key })),
       ];
       const built = [
@@ -235,24 +219,23 @@ export class SnapshotBuilder {
   }
 
   /**
-   * The region's months in `range` other than `month` that have no stored row (none built since
-   * the last full rebuild) but may count: within its chapters' active months and not after
-   * today. They are rolled up from their facts.
+   * The region's months in `range` other than `month` that are rolled up from their tallies:
+   * those without a stored row (none built since the last full rebuild) or with one built before
+   * today (its open or missing chapter-months were judged on another day), up to the latest
+   * month a tally can be for. A full rebuild every night leaves none of either by day.
    */
   private unbuiltMonths(
     stored: StoredRegionRows,
-    span: Omit<RegionSpan, 'regionId'>,
     month: MonthKey,
     range: { from: MonthKey; to: MonthKey },
     today: string,
   ): MonthKey[] {
-    if (!span.firstMonth) return [];
-    const currentMonth = today.slice(0, 7);
-    const last = span.lastMonth! < currentMonth ? span.lastMonth! : currentMonth;
-    const storedMonths = new Set(stored.ownMonths.map((part) => part.month));
+    const current = new Set(
+      stored.ownMonths.filter((part) => part.builtOn === today).map((part) => part.month),
+    );
+    const last = latestMonth();
     return monthsBetween(range.from, range.to).filter(
-      (each) =>
-        each !== month && each >= span.firstMonth! && each <= last && !storedMonths.has(each),
+      (each) => each !== month && each <= last && !current.has(each),
     );
   }
 
@@ -283,7 +266,7 @@ export class SnapshotBuilder {
         filter,
         read.regionId,
       );
-      // The roll-up reads only the months it is asked for, so the month between is ignored.
+      // `month`'s own were read already; the roll-up skips every month it was not asked for.
       statuses.push(...moreStatuses.filter((status) => status.month !== read.month));
       flows.push(...moreFlows.filter((row) => row.month !== read.month));
     }
@@ -377,6 +360,7 @@ export class SnapshotBuilder {
       regionId,
       fromKey: range.from,
       toKey: range.to,
+      dayFormat: '%Y-%m-%d',
     };
     const wanted = periods.map((period, index) => {
       replacements[`kind${index}`] = period.kind;
@@ -387,19 +371,19 @@ export class SnapshotBuilder {
     // the server read every stored row of each region to find the few wanted.
     const rows = await this.pooled({
       sql: `SELECT scope_id AS region_id, period_kind, period_key, figures, compliance,
-                   pending_tallies
+                   pending_tallies, DATE_FORMAT(as_of, :dayFormat) AS built_on
               FROM report_snapshots
              WHERE scope = 'region' AND (
                    (scope_id <> :regionId AND (${wanted.join(' OR ')}))
                 OR (scope_id = :regionId AND period_kind = 'month'
                     AND period_key BETWEEN :fromKey AND :toKey))
             UNION ALL
-            SELECT id, NULL, NULL, NULL, NULL, NULL FROM regions`,
+            SELECT id, NULL, NULL, NULL, NULL, NULL, NULL FROM regions`,
       replacements,
     });
     const regionIds = new Set<number>();
     const otherRegions: StoredRegionPart[] = [];
-    const ownMonths: MonthPart[] = [];
+    const ownMonths: StoredRegionRows['ownMonths'] = [];
     for (const row of rows) {
       const scopeId = Number(row.region_id);
       regionIds.add(scopeId);
@@ -410,8 +394,9 @@ export class SnapshotBuilder {
         compliance: jsonColumn<BuiltSnapshot['compliance']>(row.compliance),
         pendingTallies: Number(row.pending_tallies),
       };
-      if (scopeId === regionId) ownMonths.push({ ...part, month: key });
-      else {
+      if (scopeId === regionId) {
+        ownMonths.push({ ...part, month: key, builtOn: String(row.built_on) });
+      } else {
         const kind = row.period_kind as Period['kind'];
         otherRegions.push({ ...part, scopeId, period: { kind, key } });
       }

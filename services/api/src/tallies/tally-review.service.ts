@@ -220,10 +220,12 @@ export class TallyReviewService {
    * reason. Reports keep reading the approved revision until the amendment is approved.
    */
   async amend(context: SignedInContext, id: number, body: AmendTallyDto): Promise<TallyDetail> {
+    let amended: ChapterMonthJob | null = null;
     await this.lock.write(context, id, {
       version: body.version,
       action: 'amend',
       apply: async ({ tally, current, transaction }) => {
+        amended = chapterMonthOf(tally);
         const values = await this.revisions.valueOf(current, transaction);
         const next = current.revision + 1;
         await this.revisions.create(
@@ -251,6 +253,8 @@ export class TallyReviewService {
         return { state: 'draft', currentRevision: next };
       },
     });
+    // The tally is pending again (its approved revision still counts): its month says so.
+    if (amended) this.snapshots.afterTallyChange(amended);
     return this.reader.detail(context.actor, id);
   }
 
