@@ -60,6 +60,25 @@ const input = { facts, chapters, statuses, today: '2026-05-20' };
 const rollUp = (from: typeof input, targets: Parameters<typeof rollUpSnapshots>[1]) =>
   rollUpSnapshots(inputFromFacts(from), targets);
 
+/**
+ * The full rebuild's targets over the example, fiscal years from July: every tallied month plus
+ * every month a chapter was expected from `from` to `to`.
+ */
+const fullRebuildTargets = (
+  from: string,
+  to: string,
+  scopes?: Parameters<typeof targetsOfMonths>[3],
+) =>
+  targetsOfMonths(
+    chapters,
+    [
+      ...facts.map(({ chapterId, month }) => ({ chapterId, month })),
+      ...expectedChapterMonths(chapters, from, to),
+    ],
+    7,
+    scopes,
+  );
+
 describe('rollUpSnapshots', () => {
   it("keeps a chapter's stock from its last approved month when a later month is not approved", () => {
     const [chapter1] = rollUp(input, [{ scope: 'chapter', scopeId: 1, period: q1 }]);
@@ -206,15 +225,7 @@ describe('expectedChapterMonths', () => {
 
 describe('rollUpSnapshots from flows summed per region (the full rebuild)', () => {
   it('gives every region and network snapshot the chapter-by-chapter roll-up gives', () => {
-    const targets = targetsOfMonths(
-      chapters,
-      [
-        ...facts.map(({ chapterId, month }) => ({ chapterId, month })),
-        ...expectedChapterMonths(chapters, '2026-01', '2026-05'),
-      ],
-      7,
-      ['region', 'network'],
-    );
+    const targets = fullRebuildTargets('2026-01', '2026-05', ['region', 'network']);
     const byChapter = rollUp(input, targets);
     // What the database's GROUP BY region, month returns: flows only, one row per region-month.
     const sums = new Map<string, MonthFlows>();
@@ -301,14 +312,7 @@ describe('compliance read from the day of the first submission', () => {
 describe('networkFromRegions', () => {
   it('equals the network rolled up from every chapter, given every expected month its rows', () => {
     // The full rebuild's targets: tallied months plus every month a chapter was expected.
-    const targets = targetsOfMonths(
-      chapters,
-      [
-        ...facts.map(({ chapterId, month }) => ({ chapterId, month })),
-        ...expectedChapterMonths(chapters, '2026-01', '2026-05'),
-      ],
-      7,
-    );
+    const targets = fullRebuildTargets('2026-01', '2026-05');
     const built = rollUp(input, targets);
     const networks = built.filter((snapshot) => snapshot.scope === 'network');
     expect(networks.length).toBeGreaterThan(3);
@@ -327,15 +331,7 @@ describe('networkFromRegions', () => {
 describe('regionPeriodFromMonths', () => {
   it("equals the region's quarter and fiscal year rolled up from every chapter, given its months and stock", () => {
     // Fiscal years from July: FY2026 is 2025-07..2026-06, and the example's months all fall in it.
-    const targets = targetsOfMonths(
-      chapters,
-      [
-        ...facts.map(({ chapterId, month }) => ({ chapterId, month })),
-        ...expectedChapterMonths(chapters, '2025-07', '2026-05'),
-      ],
-      7,
-      ['region'],
-    );
+    const targets = fullRebuildTargets('2025-07', '2026-05', ['region']);
     const built = rollUp(input, targets);
     const longer = built.filter((snapshot) => snapshot.period.kind !== 'month');
     expect(longer.map((snapshot) => `${snapshot.scopeId}:${snapshot.period.key}`)).toEqual(
